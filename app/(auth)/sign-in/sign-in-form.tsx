@@ -1,0 +1,43 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Input } from "@/components/ui/input";
+import { signInWithPassword } from "@/lib/auth/sign-in-client";
+import { signInSchema, type SignInInput } from "@/lib/validations/auth";
+
+export function SignInForm({ defaultEmail }: { defaultEmail: string }) {
+  const [formError, setFormError] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    formState: { errors, isSubmitting },
+  } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: defaultEmail, password: "" } });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    const result = await signInWithPassword(values.email, values.password);
+    if (!result.ok) return setFormError(result.message);
+    window.location.assign("/home");
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-5">
+      <div aria-live="assertive">{formError ? <Alert tone="danger">{formError}</Alert> : null}</div>
+      <Field label="E-mail" error={errors.email?.message} required>
+        {(control) => <Input type="email" autoComplete="email" {...control} {...register("email")} />}
+      </Field>
+      <Field label="Password" error={errors.password?.message} required>
+        {(control) => <Input type="password" autoComplete="current-password" {...control} {...register("password")} />}
+      </Field>
+      <Button type="submit" className="w-full" disabled={isSubmitting}>
+        {isSubmitting ? "Signing in…" : "Sign in"}
+      </Button>
+    </form>
+  );
+}

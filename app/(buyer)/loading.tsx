@@ -1,0 +1,5 @@
+import { AreaLoading } from "@/components/area-loading";
+
+export default function Loading() {
+  return <AreaLoading />;
+}

@@ -1,0 +1,83 @@
+import "server-only";
+
+import { and, eq, gt, isNull, sql } from "drizzle-orm";
+
+import { getDb } from "../client";
+import { authSessions, type Role, users } from "../schema";
+
+export const normalizeEmail = (email: string) => email.trim().toLowerCase();
+
+export async function findUserByEmail(email: string) {
+  const db = await getDb();
+  const [row] = await db.select().from(users).where(eq(users.email, normalizeEmail(email))).limit(1);
+  return row ?? null;
+}
+
+export async function findUserById(id: string) {
+  const db = await getDb();
+  const [row] = await db.select().from(users).where(eq(users.id, id)).limit(1);
+  return row ?? null;
+}
+
+export async function createUser(input: { email: string; name: string; role: Role; passwordHash: string; company?: string | null }) {
+  const db = await getDb();
+  const [row] = await db
+    .insert(users)
+    .values({ ...input, email: normalizeEmail(input.email) })
+    .onConflictDoNothing({ target: users.email })
+    .returning();
+  return row ?? null;
+}
+
+export async function createAuthSession(input: { userId: string; sessionVersion: number; ip: string | null; userAgent: string | null; expiresAt: Date }) {
+  const db = await getDb();
+  const [row] = await db.insert(authSessions).values(input).returning({ id: authSessions.id });
+  return row.id;
+}
+
+export async function revokeAuthSession(sessionId: string) {
+  const db = await getDb();
+  await db.update(authSessions).set({ revokedAt: new Date() }).where(and(eq(authSessions.id, sessionId), isNull(authSessions.revokedAt)));
+}
+
+/** The user behind a live session: not revoked, not expired, same session version, account enabled. */
+export async function findLiveSessionUser(sessionId: string) {
+  const db = await getDb();
+  const [row] = await db
+    .select({ id: users.id, email: users.email, name: users.name, role: users.role })
+    .from(authSessions)
+    .innerJoin(users, eq(users.id, authSessions.userId))
+    .where(
+      and(
+        eq(authSessions.id, sessionId),
+        isNull(authSessions.revokedAt),
+        gt(authSessions.expiresAt, sql`now()`),
+        eq(authSessions.sessionVersion, users.sessionVersion),
+        isNull(users.disabledAt),
+      ),
+    )
+    .limit(1);
+  return row ?? null;
+}
+
+/** Ends every session of the user at once (password change, disabled account). */
+export async function bumpSessionVersion(userId: string) {
+  const db = await getDb();
+  await db.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
+}
+
+export async function setPassword(userId: string, passwordHash: string) {
+  const db = await getDb();
+  await db
+    .update(users)
+    .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
+}
+
+export async function setDisabled(userId: string, disabled: boolean) {
+  const db = await getDb();
+  await db
+    .update(users)
+    .set({ disabledAt: disabled ? new Date() : null, sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
+}

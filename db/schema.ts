@@ -1,0 +1,212 @@
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  date,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+export const roleEnum = pgEnum("role", ["agent", "inspector", "buyer", "admin"]);
+export const orderStatusEnum = pgEnum("order_status", [
+  "open",
+  "accepted",
+  "scheduled",
+  "delivered",
+  "unlocked",
+  "cancelled",
+  "refunded",
+]);
+export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
+
+const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+
+export const users = pgTable("users", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  role: roleEnum("role").notNull(),
+  passwordHash: text("password_hash").notNull(),
+  phone: text("phone"),
+  company: text("company"),
+  sessionVersion: integer("session_version").notNull().default(1),
+  disabledAt: timestamp("disabled_at", { withTimezone: true }),
+  createdAt: createdAt(),
+});
+
+export const authSessions = pgTable(
+  "auth_sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    sessionVersion: integer("session_version").notNull(),
+    ip: text("ip"),
+    userAgent: text("user_agent"),
+    createdAt: createdAt(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [index("auth_sessions_user_idx").on(t.userId)],
+);
+
+export const inspectorProfiles = pgTable("inspector_profiles", {
+  userId: uuid("user_id")
+    .primaryKey()
+    .references(() => users.id, { onDelete: "cascade" }),
+  licenceNumber: text("licence_number"),
+  licenceExpiresOn: date("licence_expires_on"),
+  insuranceKey: text("insurance_key"),
+  insuranceFileName: text("insurance_file_name"),
+  baseLocation: text("base_location"),
+  availability: jsonb("availability").$type<WeeklyAvailability>().notNull().default(sql`'{}'::jsonb`),
+  verifiedAt: timestamp("verified_at", { withTimezone: true }),
+  verifiedBy: uuid("verified_by").references(() => users.id),
+  rejectedReason: text("rejected_reason"),
+  payoutAccountId: text("payout_account_id"),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export type WeeklyAvailability = Partial<Record<"mon" | "tue" | "wed" | "thu" | "fri" | "sat" | "sun", { start: string; end: string }[]>>;
+
+export const serviceAreas = pgTable(
+  "service_areas",
+  {
+    inspectorId: uuid("inspector_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    postalCode: text("postal_code").notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.inspectorId, t.postalCode] }), index("service_areas_postal_idx").on(t.postalCode)],
+);
+
+export const listings = pgTable(
+  "listings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    street: text("street").notNull(),
+    unit: text("unit"),
+    city: text("city").notNull(),
+    state: text("state").notNull(),
+    postalCode: text("postal_code").notNull(),
+    addressKey: text("address_key").notNull(),
+    propertyType: text("property_type").notNull(),
+    yearBuilt: integer("year_built"),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("listings_address_key_idx").on(t.addressKey)],
+);
+
+export type VisitWindow = { start: string; end: string };
+
+export const orders = pgTable(
+  "orders",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    listingId: uuid("listing_id")
+      .notNull()
+      .references(() => listings.id),
+    agentId: uuid("agent_id")
+      .notNull()
+      .references(() => users.id),
+    inspectorId: uuid("inspector_id").references(() => users.id),
+    status: orderStatusEnum("status").notNull().default("open"),
+    listingRef: text("listing_ref"),
+    occupancy: text("occupancy").notNull(),
+    accessNotes: text("access_notes").notNull(),
+    cleanoutKnown: boolean("cleanout_known").notNull(),
+    cleanoutNote: text("cleanout_note"),
+    buildingSewers: integer("building_sewers").notNull().default(1),
+    timeZone: text("time_zone").notNull(),
+    deadline: timestamp("deadline", { withTimezone: true }).notNull(),
+    visitWindows: jsonb("visit_windows").$type<VisitWindow[]>().notNull(),
+    anyTimeInWindows: boolean("any_time_in_windows").notNull().default(false),
+    buyerName: text("buyer_name").notNull(),
+    buyerEmail: text("buyer_email").notNull(),
+    buyerId: uuid("buyer_id").references(() => users.id),
+    notes: text("notes"),
+    priceCents: integer("price_cents").notNull(),
+    platformFeeCents: integer("platform_fee_cents").notNull(),
+    priceLines: jsonb("price_lines").$type<{ label: string; cents: number }[]>().notNull(),
+    appointmentStart: timestamp("appointment_start", { withTimezone: true }),
+    appointmentEnd: timestamp("appointment_end", { withTimezone: true }),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    deliveredAt: timestamp("delivered_at", { withTimezone: true }),
+    unlockedAt: timestamp("unlocked_at", { withTimezone: true }),
+    cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("orders_agent_idx").on(t.agentId, t.createdAt),
+    index("orders_inspector_idx").on(t.inspectorId),
+    index("orders_status_deadline_idx").on(t.status, t.deadline),
+    index("orders_buyer_email_idx").on(t.buyerEmail),
+    index("orders_listing_idx").on(t.listingId),
+  ],
+);
+
+export const orderEvents = pgTable(
+  "order_events",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    fromStatus: orderStatusEnum("from_status"),
+    toStatus: orderStatusEnum("to_status").notNull(),
+    actorId: uuid("actor_id").references(() => users.id),
+    reason: text("reason"),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("order_events_order_idx").on(t.orderId, t.at)],
+);
+
+export const mailOutbox = pgTable(
+  "mail_outbox",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    dedupeKey: text("dedupe_key").notNull().unique(),
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html").notNull(),
+    attachments: jsonb("attachments").$type<{ filename: string; contentType: string; content: string }[]>().notNull().default(sql`'[]'::jsonb`),
+    status: mailStatusEnum("status").notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }).notNull().defaultNow(),
+    lastError: text("last_error"),
+    createdAt: createdAt(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+  },
+  (t) => [index("mail_outbox_pending_idx").on(t.status, t.nextAttemptAt)],
+);
+
+export const auditLog = pgTable(
+  "audit_log",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+    actorId: uuid("actor_id").references(() => users.id),
+    action: text("action").notNull(),
+    targetType: text("target_type"),
+    targetId: text("target_id"),
+    ip: text("ip"),
+    data: jsonb("data").$type<Record<string, unknown>>().notNull().default(sql`'{}'::jsonb`),
+  },
+  (t) => [index("audit_log_at_idx").on(t.at), index("audit_log_action_idx").on(t.action)],
+);
+
+export type User = typeof users.$inferSelect;
+export type Role = (typeof roleEnum.enumValues)[number];
+export type OrderStatus = (typeof orderStatusEnum.enumValues)[number];
+export type Order = typeof orders.$inferSelect;
+export type Listing = typeof listings.$inferSelect;

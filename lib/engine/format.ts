@@ -1,0 +1,26 @@
+import type { Finding } from "./record";
+import { findingLabel } from "./finding-types";
+
+/** Footages to a tenth of a foot: the counter reads no finer. */
+export const ftText = (v: number): string => `${Math.round(v * 10) / 10} ft`;
+
+export const pctText = (v: number): string => `${Math.round(v)} %`;
+
+export const inText = (v: number): string => `${Math.round(v * 100) / 100} in`;
+
+export function dollarsText(cents: number): string {
+  return `$${Math.round(cents / 100).toLocaleString("en-US")}`;
+}
+
+export const rangeText = (low: number, high: number): string => `${dollarsText(low)}-${dollarsText(high)}`;
+
+export function placeText(f: Finding): string {
+  return f.to !== null && f.to > f.at ? `from ${ftText(f.at)} to ${ftText(f.to)}` : `at ${ftText(f.at)}`;
+}
+
+export const describeFinding = (f: Finding): string => `${findingLabel(f.type).toLowerCase()} (grade ${f.grade}) ${placeText(f)}`;
+
+export function listText(items: readonly string[]): string {
+  if (items.length <= 1) return items.join("");
+  return `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}`;
+}

@@ -1,0 +1,22 @@
+export function formatAddress(a: { street: string; unit?: string | null; city: string; state: string; postalCode: string }): string {
+  return `${a.street}${a.unit ? `, ${a.unit}` : ""}, ${a.city}, ${a.state} ${a.postalCode}`;
+}
+
+export function formatDateTime(date: Date | string, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" }).format(new Date(date));
+}
+
+export function formatDate(date: Date | string, timeZone = "UTC"): string {
+  return new Intl.DateTimeFormat("en-US", { timeZone, month: "short", day: "numeric", year: "numeric" }).format(new Date(date));
+}
+
+/** "in 3 d 4 h", "in 5 h", "2 h ago": for deadlines. */
+export function formatCountdown(target: Date | string, now = new Date()): string {
+  const ms = new Date(target).getTime() - now.getTime();
+  const abs = Math.abs(ms);
+  const days = Math.floor(abs / 86_400_000);
+  const hours = Math.floor((abs % 86_400_000) / 3_600_000);
+  const minutes = Math.floor((abs % 3_600_000) / 60_000);
+  const text = days > 0 ? `${days} d ${hours} h` : hours > 0 ? `${hours} h ${minutes} min` : `${minutes} min`;
+  return ms >= 0 ? `in ${text}` : `${text} ago`;
+}

@@ -1,0 +1,14 @@
+// Invented demo values for the demo market (Harrow Falls). Admins set the live prices per market;
+// these are only the starting point and what the public pricing page shows. Money in integer cents,
+// shares in basis points (10000 = 100 %).
+export const DEFAULT_PRICES = {
+  baseCents: 32500,
+  noCleanoutCents: 7500,
+  rushCents: 9500,
+  extraSewerCents: 15000,
+  reuseCents: 14500,
+  platformFeeBps: 2000,
+  reuseInspectorShareBps: 5000,
+} as const;
+
+export type Prices = { [K in keyof typeof DEFAULT_PRICES]: number };

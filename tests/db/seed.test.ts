@@ -1,0 +1,28 @@
+import { count } from "drizzle-orm";
+import { describe, expect, it } from "vitest";
+
+import { getDb } from "@/db/client";
+import { orders, users } from "@/db/schema";
+import { seedDemoWorld } from "@/db/seed";
+
+describe("the demo world", () => {
+  it("is seeded once; a second run changes nothing", async () => {
+    expect((await seedDemoWorld()).seeded).toBe(true);
+    const db = await getDb();
+    const [u1] = await db.select({ n: count() }).from(users);
+    const [o1] = await db.select({ n: count() }).from(orders);
+    expect((await seedDemoWorld()).seeded).toBe(false);
+    const [u2] = await db.select({ n: count() }).from(users);
+    const [o2] = await db.select({ n: count() }).from(orders);
+    expect(u2.n).toBe(u1.n);
+    expect(o2.n).toBe(o1.n);
+  });
+
+  it("has orders in every state and the demo sign-ins", async () => {
+    const db = await getDb();
+    const states = new Set((await db.select({ s: orders.status }).from(orders)).map((r) => r.s));
+    expect([...states].sort()).toEqual(["accepted", "cancelled", "delivered", "open", "refunded", "scheduled", "unlocked"]);
+    const emails = (await db.select({ e: users.email }).from(users)).map((r) => r.e);
+    for (const e of ["agent@gradeline.test", "inspector@gradeline.test", "inspector2@gradeline.test", "buyer@gradeline.test", "admin@gradeline.test"]) expect(emails).toContain(e);
+  });
+});
