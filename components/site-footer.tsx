@@ -4,7 +4,7 @@ import { LogoMark } from "@/components/ui/logo";
 
 export function SiteFooter() {
   return (
-    <footer className="mt-24 border-t border-rule bg-paper-2/50 print:hidden">
+    <footer className="mt-16 border-t border-rule bg-paper-2/50 print:hidden">
       <div className="mx-auto grid max-w-6xl gap-10 px-4 py-12 sm:px-6 md:grid-cols-[1fr_2fr]">
         <div className="space-y-3">
           <p className="flex items-center gap-2 font-serif text-lg font-semibold">

@@ -13,10 +13,16 @@ const marks = [
 
 export function LateralFigure() {
   return (
-    <figure className="w-full">
+    <figure className="w-full rounded-card border border-rule bg-white shadow-[0_18px_40px_-30px_rgb(27_36_34/0.4)]">
+      <div className="flex items-baseline justify-between gap-4 border-b border-rule px-4 py-2.5 sm:px-5">
+        <span className="text-xs font-semibold tracking-[0.12em] whitespace-nowrap text-ink-2 uppercase">Line profile</span>
+        <span className="num text-xs whitespace-nowrap text-ink-2">
+          <span className="hidden sm:inline">14 Larch St · </span>80 ft · sample
+        </span>
+      </div>
       <svg
-        viewBox="0 0 640 330"
-        className="h-auto w-full"
+        viewBox="10 0 630 318"
+        className="h-auto w-full px-1 pt-2 sm:px-3"
         role="img"
         aria-labelledby="lateral-title lateral-desc"
       >
@@ -56,16 +62,16 @@ export function LateralFigure() {
 
         {/* public main, seen end-on */}
         <circle cx="585" cy="199" r="22" fill="#faf8f3" stroke="#505b57" strokeWidth="6" />
-        <text x="585" y="244" textAnchor="middle" className="fill-ink-2 font-sans text-[11px]">
+        <text x="585" y="244" textAnchor="middle" className="fill-ink-2 font-sans text-[12.5px]">
           Public main
         </text>
 
         {/* property line */}
         <path d={`M${x(56)} 60V262`} stroke="#175a53" strokeWidth="1.2" strokeDasharray="5 4" />
-        <text x={x(56) - 6} y="72" textAnchor="end" className="fill-teal font-sans text-[11px]">
+        <text x={x(56) - 6} y="72" textAnchor="end" className="fill-teal font-sans text-[12.5px]">
           Property line
         </text>
-        <text x={x(56) + 6} y="72" className="fill-teal font-sans text-[11px]">
+        <text x={x(56) + 6} y="72" className="fill-teal font-sans text-[12.5px]">
           City
         </text>
 
@@ -75,7 +81,7 @@ export function LateralFigure() {
         <circle cx={x(34)} cy={y(34)} r="7" fill="none" stroke="#a8321e" strokeWidth="2.5" />
 
         {/* finding flags */}
-        <g className="font-sans text-[11px]">
+        <g className="font-sans text-[12.5px]">
           <path d={`M${x(34)} ${y(34) + 9}V214`} stroke="#a8321e" strokeWidth="1" />
           <rect x={x(34) - 9} y="214" width="18" height="16" rx="2" fill="#a8321e" />
           <text x={x(34)} y="226" textAnchor="middle" className="num fill-white font-semibold">
@@ -100,14 +106,14 @@ export function LateralFigure() {
           <g key={m.ft}>
             <path d={`M${x(m.ft)} ${m.ground + 2}V${y(m.ft) - 6}`} stroke="#175a53" strokeWidth="1" strokeDasharray="2 3" />
             <path d={`M${x(m.ft) - 5} ${m.ground - 6}l10 6m0-6-10 6`} stroke="#175a53" strokeWidth="1.8" />
-            <text x={x(m.ft)} y={m.ground - 12} textAnchor="middle" className="num fill-teal text-[11px] font-medium">
+            <text x={x(m.ft)} y={m.ground - 12} textAnchor="middle" className="num fill-teal text-[12.5px] font-medium">
               {m.depth}
             </text>
           </g>
         ))}
 
         {/* footage ruler */}
-        <g className="num text-[10.5px]">
+        <g className="num text-[12px]">
           <path d={`M${x(0)} 282H${x(80)}`} stroke="#505b57" strokeWidth="1" />
           {ticks.map((t) => (
             <g key={t}>
@@ -125,7 +131,10 @@ export function LateralFigure() {
         </g>
 
         {/* labels */}
-        <g className="font-sans text-[11px]">
+        <g className="font-sans text-[12.5px]">
+          <text x="630" y="138" textAnchor="end" className="fill-ink-2">
+            Street
+          </text>
           <text x="222" y="90" className="fill-ink-2">
             Cleanout · zero
           </text>
@@ -134,7 +143,7 @@ export function LateralFigure() {
           </text>
         </g>
       </svg>
-      <figcaption className="mt-3 text-sm text-ink-2">
+      <figcaption className="border-t border-rule px-4 py-3 text-sm leading-relaxed text-ink-2 sm:px-5">
         A lateral as the rated summary draws it: footage from the cleanout, findings by severity, locate marks with depths,
         and where the city&rsquo;s part begins. Invented example.
       </figcaption>

@@ -45,7 +45,7 @@ const roles: { id: string; title: string; lead: string; points: ReactNode[] }[] 
   {
     id: "inspectors",
     title: "Inspectors",
-    lead: "Jobs in your area, a report that writes itself from your data, and prompt pay.",
+    lead: "Jobs in your area, a clear report built from your own records, and pay on unlock.",
     points: [
       "A job board of open orders in your service area, soonest deadline first. Accept, and the job is yours.",
       "A workspace that works one-handed on a phone in a basement: clips, line profile, locate marks, findings.",
@@ -105,7 +105,7 @@ function Section({
     <section aria-labelledby={`${id}-title`} className={`border-t border-rule py-16 sm:py-24 ${className}`}>
       <div className="mx-auto max-w-6xl px-4 sm:px-6">
         {eyebrow ? <p className="text-xs font-semibold tracking-[0.14em] text-copper uppercase">{eyebrow}</p> : null}
-        <h2 id={`${id}-title`} className="mt-2 max-w-[24ch] text-3xl leading-tight font-semibold tracking-[-0.01em] sm:text-4xl">
+        <h2 id={`${id}-title`} className="mt-2 max-w-[30ch] text-3xl leading-tight font-semibold tracking-[-0.01em] sm:text-4xl">
           {title}
         </h2>
         {children}

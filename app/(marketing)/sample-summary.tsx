@@ -50,7 +50,7 @@ export function SampleSummary() {
             then clay
           </p>
         </div>
-        <div className="text-right">
+        <div className="sm:text-right">
           <p className="mb-1 text-xs text-ink-2">Severity rating</p>
           <SeverityBadge severity={4} size="lg" />
         </div>
@@ -64,15 +64,22 @@ export function SampleSummary() {
             <tr>
               <th scope="col">Footage (ft)</th>
               <th scope="col">Finding</th>
-              <th scope="col">Severity</th>
+              <th scope="col" className="hidden sm:table-cell">
+                Severity
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-rule">
             {findings.map((f) => (
               <tr key={f.at}>
                 <td className="num w-16 py-2 pr-3 align-top text-ink sm:w-20">{f.at}</td>
-                <td className="py-2 pr-3 align-top">{f.what}</td>
-                <td className="py-2 text-right align-top">
+                <td className="py-2 pr-3 align-top">
+                  {f.what}
+                  <span className="mt-1 block sm:hidden">
+                    <SeverityBadge severity={f.severity} size="sm" />
+                  </span>
+                </td>
+                <td className="hidden py-2 text-right align-top sm:table-cell">
                   <SeverityBadge severity={f.severity} size="sm" />
                 </td>
               </tr>

@@ -17,7 +17,7 @@ export const CAUTIONS = [
   },
   {
     title: "Trenches 5 feet or deeper",
-    text: "A trench 5 feet deep or more needs a protective system (sloping, benching, shoring or a trench shield) under OSHA 29 CFR 1926.652; a shallower one can need it too. Never enter an unprotected trench.",
+    text: "A trench 5 feet deep or more needs a protective system (sloping, benching, shoring or a trench shield) under OSHA\u00a029\u00a0CFR\u00a01926.652; a shallower one can need it too. Never enter an unprotected trench.",
   },
   {
     title: "Confined spaces and sewage",

@@ -77,7 +77,7 @@ export function SeverityScale({ current, className }: { current?: number; classN
           key={s}
           aria-current={active === s ? "true" : undefined}
           className={clsx(
-            "flex flex-col gap-1.5 rounded-sm border px-2 pt-1.5 pb-2 text-xs sm:text-sm",
+            "flex min-w-0 flex-col gap-1.5 rounded-sm border px-1.5 pt-1.5 pb-2 text-xs sm:px-2 sm:text-sm",
             styles[s].soft,
             active === s && "ring-2 ring-ink ring-offset-1 ring-offset-paper",
           )}

@@ -1,5 +1,5 @@
 import type { Basis } from "./basis";
-import { ftText, listText } from "./format";
+import { ftRange, ftText, listText } from "./format";
 import type { Lengths } from "./geometry";
 import type { InspectionRecord } from "./record";
 import type { RateTable } from "./rates";
@@ -34,7 +34,7 @@ export interface Caution {
 }
 
 const DIGS = ["spot_repair", "excavate_replace", "pipe_bursting"] as const;
-const span = (s: Stretch) => `${ftText(s.from)}-${ftText(s.to)}`;
+const span = (s: Stretch) => ftRange(s.from, s.to);
 
 export interface CautionInput {
   record: InspectionRecord;

@@ -1,8 +1,15 @@
 import type { Finding } from "./record";
-import { findingLabel } from "./finding-types";
+import { findingWord } from "./finding-types";
+
+const tenth = (v: number) => Math.round(v * 10) / 10;
 
 /** Footages to a tenth of a foot: the counter reads no finer. */
-export const ftText = (v: number): string => `${Math.round(v * 10) / 10} ft`;
+export const ftText = (v: number): string => `${tenth(v)} ft`;
+
+export const ftRange = (from: number, to: number): string => `${tenth(from)}-${tenth(to)} ft`;
+
+/** Liner walls to a thousandth of an inch, as F1216 figures are given. */
+export const wallText = (v: number): string => `${Math.round(v * 1000) / 1000} in`;
 
 export const pctText = (v: number): string => `${Math.round(v)} %`;
 
@@ -18,7 +25,7 @@ export function placeText(f: Finding): string {
   return f.to !== null && f.to > f.at ? `from ${ftText(f.at)} to ${ftText(f.to)}` : `at ${ftText(f.at)}`;
 }
 
-export const describeFinding = (f: Finding): string => `${findingLabel(f.type).toLowerCase()} (grade ${f.grade}) ${placeText(f)}`;
+export const describeFinding = (f: Finding): string => `${findingWord(f.type)} (grade ${f.grade}) ${placeText(f)}`;
 
 export function listText(items: readonly string[]): string {
   if (items.length <= 1) return items.join("");

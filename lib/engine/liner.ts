@@ -95,8 +95,8 @@ export const SECTIONAL_MAX_FT = 25;
 // published: scopes. F1216 inversion lining 4-108 in; F2561 main-and-lateral lining for laterals
 // 3-12 in up to 150 ft; F2599 sectional lining 4-60 in.
 export function liningStandardFor(diameterIn: number, lengthFt: number): string | null {
-  if (diameterIn >= 4 && diameterIn <= 60 && lengthFt <= SECTIONAL_MAX_FT) return "ASTM F2599 (sectional)";
-  if (diameterIn >= 3 && diameterIn <= 12 && lengthFt <= 150) return "ASTM F2561";
-  if (diameterIn >= 4 && diameterIn <= 108) return "ASTM F1216";
+  if (diameterIn >= 4 && diameterIn <= 60 && lengthFt <= SECTIONAL_MAX_FT) return "an ASTM F2599 sectional liner";
+  if (diameterIn >= 3 && diameterIn <= 12 && lengthFt <= 150) return "an ASTM F2561 lateral liner";
+  if (diameterIn >= 4 && diameterIn <= 108) return "an ASTM F1216 liner";
   return null;
 }

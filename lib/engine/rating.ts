@@ -21,8 +21,10 @@ export const DENSITY_BANDS: Bands = [5, 15, 40, 80];
 export const MIN_DENSITY_LENGTH_FT = 50;
 /** A continuous defect scores once for every started 5 ft it runs. */
 export const CONTINUOUS_STEP_FT = 5;
-/** Density can lift the rating at most this many steps above the worst single finding. */
+/** Density can lift the rating at most this many steps above the worst single finding ... */
 const DENSITY_LIFT = 1;
+/** ... and never to Critical: that takes a failed pipe, not many faults. */
+const DENSITY_CEILING = 4;
 /** A finding reaching this close to where the camera stopped is the reason it stopped. */
 export const STOP_NEAR_FT = 3;
 
@@ -75,24 +77,24 @@ export function rate(record: InspectionRecord): Rating {
 
   const overFt = Math.max(surveyEnd.at, MIN_DENSITY_LENGTH_FT);
   const agg = aggregate({ items: scoredItems(findings), length: overFt, meanPer: 100, peakBands: PEAK_BANDS, meanBands: DENSITY_BANDS });
-  const peak = worst === null ? 1 : worst.grade;
-  const lifted = Math.min(agg.meanGrade, peak + DENSITY_LIFT);
+  const peak = agg.peakGrade;
+  const lifted = Math.min(agg.meanGrade, peak + DENSITY_LIFT, DENSITY_CEILING);
   let severity = Math.max(peak, lifted);
   const reasons: string[] = [];
-  if (worst) reasons.push(`worst finding: ${describe(worst)}`);
+  if (worst) reasons.push(`the worst finding is the ${describe(worst)}`);
   else reasons.push("no defects were recorded");
-  if (lifted > peak) reasons.push(`defects are dense: ${Math.round(agg.mean)} points per 100 ft`);
+  if (lifted > peak) reasons.push(`the defects are close together: ${Math.round(agg.mean)} points per 100 ft`);
 
   const collapse = findings.find((f) => f.type === "collapse");
   if (collapse) {
     severity = 5;
-    reasons.unshift(`a collapse at ${ft(collapse.at)}`);
+    reasons.unshift(`the pipe has collapsed at ${ft(collapse.at)}`);
   }
   if (STOPPED_IN_LINE.includes(surveyEnd.reason)) {
     const stopper = findings.find((f) => f.grade >= 3 && (f.to ?? f.at) >= surveyEnd.at - STOP_NEAR_FT);
     if (stopper) {
       severity = 5;
-      reasons.unshift(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}, at a ${describe(stopper)}`);
+      reasons.unshift(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}, at the ${describe(stopper)}`);
     } else {
       // practice: an unseen remainder is never rated better than Moderate.
       severity = Math.max(severity, 3);

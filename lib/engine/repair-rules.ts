@@ -1,4 +1,4 @@
-import { describeFinding, ftText, inText, listText, pctText } from "./format";
+import { describeFinding, ftRange, ftText, inText, listText, pctText, wallText } from "./format";
 import { liningStandardFor, type LinerWall } from "./liner";
 import type { Finding } from "./record";
 import { PROTECTIVE_SYSTEM_DEPTH_FT } from "./safety";
@@ -52,7 +52,7 @@ export function cleanFit(facts: StretchFacts): Fit {
 function surfaceWords(surface: Surface): string {
   if (surface === "street") return "it means digging in the street, with a permit and traffic control";
   if (surface === "under_building") return "it means opening the floor of the building";
-  return `the ${SURFACE_LABELS[surface]} on top is broken and then restored`;
+  return "the concrete or pavers on top are broken and then restored";
 }
 
 function digReasons(facts: StretchFacts, surface: Surface, depthFt: number, what: string): string[] {
@@ -70,7 +70,7 @@ export function spotFit(facts: StretchFacts, surface: Surface, depthFt: number):
 }
 
 export function excavateFit(facts: StretchFacts, surface: Surface, depthFt: number): Fit {
-  const what = `dig a trench from ${ftText(facts.from)} to ${ftText(facts.to)} and lay new pipe at a true grade; it mends sags, collapses and offsets alike`;
+  const what = `dig a trench along ${ftRange(facts.from, facts.to)} and lay new pipe at a true grade; it mends sags, collapses and offsets alike`;
   return { fits: true, favoured: false, reasons: digReasons(facts, surface, depthFt, what) };
 }
 
@@ -105,7 +105,7 @@ export function liningFit(facts: StretchFacts, surface: Surface, liner: LinerWal
   if (!standard) blocks.push(`no lining standard covers ${sizes} pipe over ${ftText(facts.length)} (ASTM F1216: 4-108 in; F2561: 3-12 in up to 150 ft)`);
   if (blocks.length > 0) return { fits: false, favoured: false, reasons: blocks };
 
-  const reasons = [`line ${ftText(facts.from)} to ${ftText(facts.to)} from inside the pipe (${standard}); design wall at least ${inText(liner.designIn)} by ASTM F1216 Appendix X1`];
+  const reasons = [`line ${ftRange(facts.from, facts.to)} from inside with ${standard}; its wall must be at least ${wallText(liner.designIn)} thick (ASTM F1216 Appendix X1)`];
   if (ofType(facts, "roots").length > 0) reasons.push("the roots are cut out first");
   const dirt = ofType(facts, "deposits", "grease", "obstruction", "corrosion_or_scale");
   if (dirt.length > 0) reasons.push("deposits and scale are cleaned out first");

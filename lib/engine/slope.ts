@@ -1,3 +1,4 @@
+import { DESIGN_MANNING_N, fullFlowGpm } from "./flow";
 import { segmentsOverlapping, sideAt } from "./geometry";
 import type { InspectionRecord, Locate } from "./record";
 import { fractionText, inPerFt, minimumSlope, type SlopeRuleSet } from "./slope-rules";
@@ -17,6 +18,8 @@ export interface GradeBetweenMarks {
   minimumInPerFt: number;
   minimumText: string;
   meetsMinimum: boolean;
+  /** Manning's full-pipe capacity at this grade, US gal/min, with the design n of the pipe's material. */
+  fullFlowGpm: number;
   /** True when either mark lacks a ground elevation, so the ground was taken as level. */
   assumedLevelGround: boolean;
   /** Always true: locator depths and counter footages are approximate. */
@@ -52,8 +55,10 @@ export function gradesBetweenMarks(record: InspectionRecord, rules: SlopeRuleSet
     const up = marks[i - 1];
     const down = marks[i];
     const { slopeFtPerFt, assumedLevelGround } = gradeBetween(up, down);
-    // The smallest pipe between the marks has the strictest minimum slope.
-    const diameterIn = Math.min(...segmentsOverlapping(record.segments, up.at, down.at).map((s) => s.diameterIn));
+    // The smallest pipe between the marks has the strictest minimum slope and the least capacity.
+    const segs = segmentsOverlapping(record.segments, up.at, down.at);
+    const narrowest = segs.reduce((a, b) => (b.diameterIn < a.diameterIn ? b : a));
+    const diameterIn = narrowest.diameterIn;
     const minimum = minimumSlope(rules, diameterIn);
     const slopeIn = slopeToInPerFt(slopeFtPerFt);
     out.push({
@@ -69,6 +74,7 @@ export function gradesBetweenMarks(record: InspectionRecord, rules: SlopeRuleSet
       minimumInPerFt: inPerFt(minimum),
       minimumText: `${fractionText(minimum)} in per ft`,
       meetsMinimum: slopeIn * minimum.den >= minimum.num - SLOPE_EPSILON,
+      fullFlowGpm: fullFlowGpm(diameterIn, Math.max(0, slopeFtPerFt), DESIGN_MANNING_N[narrowest.material]),
       assumedLevelGround,
       estimate: true,
     });

@@ -57,6 +57,15 @@ export const SURVEY_END_LABELS: Record<SurveyEndReason, string> = {
   other: "the survey ended",
 };
 
+/** How the camera's run ended, to follow "The camera went 74 ft from the cleanout ...". */
+export const SURVEY_END_PHRASES: Record<SurveyEndReason, string> = {
+  reached_main: "and reached the main",
+  blocked: "and was stopped by a blockage",
+  could_not_pass: "and could not get any further",
+  cable_end: "before its cable ran out",
+  other: "before the survey ended",
+};
+
 /** A survey that stopped at something in the pipe, rather than at its end or the cable's. */
 export const STOPPED_IN_LINE: readonly SurveyEndReason[] = ["blocked", "could_not_pass"];
 

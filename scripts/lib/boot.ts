@@ -31,7 +31,10 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   const closers: Closer[] = [];
   // The lock comes before anything else touches the data folder.
   const dataDir = process.env.DATA_DIR || ".data";
-  if (!process.env.DATABASE_URL) acquireDataLock(path.resolve(dataDir, "db"));
+  if (!process.env.DATABASE_URL) {
+    acquireDataLock(path.resolve(dataDir, "db"));
+    process.on("exit", releaseAllDataLocks);
+  }
   if (opts.standins) applyLocalDefaults();
   const e = env();
 
@@ -85,7 +88,6 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   };
   process.on("SIGTERM", () => void shutdown("SIGTERM"));
   process.on("SIGINT", () => void shutdown("SIGINT"));
-  process.on("exit", releaseAllDataLocks);
 
   return { url: `http://${e.HOST}:${e.PORT}`, databaseDir: process.env.DATABASE_URL ? "(PostgreSQL server)" : databaseDir() };
 }

@@ -196,14 +196,7 @@ export interface Transfer {
   transfer_group: string | null;
 }
 
-export type ApiObject =
-  | CheckoutSession
-  | PaymentIntent
-  | Charge
-  | Refund
-  | Account
-  | Transfer
-  | TransferReversal;
+export type ApiObject = CheckoutSession | PaymentIntent | Charge | Refund | Account | Transfer | TransferReversal;
 
 export interface StandinEvent {
   id: string;

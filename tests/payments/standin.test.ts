@@ -1,7 +1,16 @@
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
-import { createSession, DECLINED_CARD, sdkFor, startHarness, submitPayForm, SUCCESS_CARD, WEBHOOK_SECRET, type Harness } from "./support/harness";
+import {
+  createSession,
+  DECLINED_CARD,
+  sdkFor,
+  startHarness,
+  submitPayForm,
+  SUCCESS_CARD,
+  WEBHOOK_SECRET,
+  type Harness,
+} from "./support/harness";
 
 let h: Harness;
 beforeAll(async () => {
@@ -48,7 +57,9 @@ describe("payments stand-in: checkout through the real SDK", () => {
     expect(missing).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(missing).toMatchObject({ code: "parameter_missing", param: "line_items", statusCode: 400 });
 
-    const unknown = await createSession(h.stripe, { sucess_url: "typo" } as Partial<Stripe.Checkout.SessionCreateParams>).catch((e: unknown) => e);
+    const unknown = await createSession(h.stripe, { sucess_url: "typo" } as Partial<Stripe.Checkout.SessionCreateParams>).catch(
+      (e: unknown) => e,
+    );
     expect(unknown).toMatchObject({ code: "parameter_unknown", param: "sucess_url" });
 
     const soon = await createSession(h.stripe, { expires_at: Math.floor(Date.now() / 1000) + 60 }).catch((e: unknown) => e);
@@ -70,7 +81,11 @@ describe("payments stand-in: checkout through the real SDK", () => {
     expect(html).toContain("Sewer scope report — 12 Elm St");
     expect(html).toContain("$325.00");
     expect(html).toMatch(/<html lang="en">/);
-    for (const [id, label] of [["card_number", "Card number"], ["exp", "Expiry"], ["cvc", "CVC"]]) {
+    for (const [id, label] of [
+      ["card_number", "Card number"],
+      ["exp", "Expiry"],
+      ["cvc", "CVC"],
+    ]) {
       expect(html).toMatch(new RegExp(`<label for="${id}">${label}`));
       expect(html).toContain(`id="${id}"`);
     }
@@ -85,9 +100,21 @@ describe("payments stand-in: checkout through the real SDK", () => {
     expect(res.headers.get("location")).toBe(`http://127.0.0.1:3999/orders/order_123/paid?session_id=${created.id}`);
 
     const session = await h.stripe.checkout.sessions.retrieve(created.id, { expand: ["payment_intent.latest_charge"] });
-    expect(session).toMatchObject({ status: "complete", payment_status: "paid", url: null, customer_details: { email: "buyer@example.com" } });
+    expect(session).toMatchObject({
+      status: "complete",
+      payment_status: "paid",
+      url: null,
+      customer_details: { email: "buyer@example.com" },
+    });
     const intent = session.payment_intent as Stripe.PaymentIntent;
-    expect(intent).toMatchObject({ object: "payment_intent", status: "succeeded", amount: 32500, amount_received: 32500, currency: "usd", transfer_group: "order_123" });
+    expect(intent).toMatchObject({
+      object: "payment_intent",
+      status: "succeeded",
+      amount: 32500,
+      amount_received: 32500,
+      currency: "usd",
+      transfer_group: "order_123",
+    });
     expect(intent.id).toMatch(/^pi_/);
     const charge = intent.latest_charge as Stripe.Charge;
     expect(charge.id).toMatch(/^ch_/);
@@ -111,14 +138,22 @@ describe("payments stand-in: checkout through the real SDK", () => {
     expect(event).toMatchObject({ object: "event", livemode: false, api_version: Stripe.API_VERSION });
     expect(event.id).toMatch(/^evt_/);
     const object = event.data.object as Stripe.Checkout.Session;
-    expect(object).toMatchObject({ id: created.id, status: "complete", payment_status: "paid", payment_intent: intent.id, metadata: { orderId: "order_123" } });
+    expect(object).toMatchObject({
+      id: created.id,
+      status: "complete",
+      payment_status: "paid",
+      payment_intent: intent.id,
+      metadata: { orderId: "order_123" },
+    });
   });
 
   it("webhook signatures fail for a changed body, a wrong secret and an old timestamp", async () => {
     const hook = await h.receiver.waitFor("checkout.session.completed");
     const signature = hook.signature as string;
-    const verify = (body: string, secret = WEBHOOK_SECRET, receivedAtMs?: number) =>
-      () => h.stripe.webhooks.constructEvent(body, signature, secret, 300, undefined, receivedAtMs);
+    const verify =
+      (body: string, secret = WEBHOOK_SECRET, receivedAtMs?: number) =>
+      () =>
+        h.stripe.webhooks.constructEvent(body, signature, secret, 300, undefined, receivedAtMs);
 
     expect(verify(hook.body)).not.toThrow();
     expect(verify(hook.body.replace('"paid"', '"unpaid"'))).toThrow(Stripe.errors.StripeSignatureVerificationError);
@@ -186,7 +221,10 @@ describe("payments stand-in: checkout through the real SDK", () => {
     });
     expect(created.amount_total).toBe(32500);
     const items = await h.stripe.checkout.sessions.listLineItems(created.id);
-    expect(items.data.map((i) => [i.description, i.quantity, i.amount_total])).toEqual([["Scope report", 1, 30000], ["Extra clip", 2, 2500]]);
+    expect(items.data.map((i) => [i.description, i.quantity, i.amount_total])).toEqual([
+      ["Scope report", 1, 30000],
+      ["Extra clip", 2, 2500],
+    ]);
     const expanded = await h.stripe.checkout.sessions.retrieve(created.id, { expand: ["line_items"] });
     expect(expanded.line_items?.data).toHaveLength(2);
     await expect(h.stripe.checkout.sessions.retrieve(created.id, { expand: ["customer_details"] })).rejects.toThrow(/cannot be expanded/);

@@ -10,7 +10,7 @@ export default async function setup() {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "gradeline-server-"));
   const [port, s3, smtp, payments] = await Promise.all([freePort(), freePort(), freePort(), freePort()]);
   const url = `http://127.0.0.1:${port}`;
-  const env = {
+  const env: NodeJS.ProcessEnv = {
     ...process.env,
     NODE_ENV: "production",
     GRADELINE_STANDINS: "1",

@@ -52,9 +52,10 @@ const retrieve: ApiHandler = (ctx, { params, path }) => {
 const update: ApiHandler = (ctx, { params: p, path, source }) => {
   p.allowOnly(["email", "metadata"]);
   const account = mustFind(ctx, path.id as string);
+  const metadata = p.metadata("metadata", account.metadata);
+  const email = p.has("email") ? (p.email("email") ?? null) : account.email;
   const previous = { email: account.email, metadata: { ...account.metadata } };
-  account.metadata = p.metadata("metadata", account.metadata);
-  if (p.has("email")) account.email = p.email("email") ?? null;
+  Object.assign(account, { metadata, email });
   ctx.events.emit("account.updated", account, source, previous);
   return account;
 };

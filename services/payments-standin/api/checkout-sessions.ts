@@ -41,8 +41,17 @@ function readLineItem(item: ParamReader): LineItem {
 
 const create: ApiHandler = (ctx, { params: p, expand: paths }) => {
   p.allowOnly([
-    "cancel_url", "client_reference_id", "customer_email", "expand", "expires_at", "line_items",
-    "metadata", "mode", "payment_intent_data", "payment_method_types", "success_url",
+    "cancel_url",
+    "client_reference_id",
+    "customer_email",
+    "expand",
+    "expires_at",
+    "line_items",
+    "metadata",
+    "mode",
+    "payment_intent_data",
+    "payment_method_types",
+    "success_url",
   ]);
   const mode = p.oneOf("mode", ["payment", "setup", "subscription"], { required: true });
   if (mode !== "payment") throw invalid("The local payment stand-in supports mode=payment only.", "mode");
@@ -54,7 +63,8 @@ const create: ApiHandler = (ctx, { params: p, expand: paths }) => {
   if (total < MIN_TOTAL) {
     throw invalid(`The Checkout Session's total amount due must add up to at least ${formatAmount(MIN_TOTAL, currency)}.`, "line_items");
   }
-  if (total > MAX_TOTAL) throw invalid(`The Checkout Session's total amount due must be at most ${formatAmount(MAX_TOTAL, currency)}.`, "line_items");
+  if (total > MAX_TOTAL)
+    throw invalid(`The Checkout Session's total amount due must be at most ${formatAmount(MAX_TOTAL, currency)}.`, "line_items");
   const methods = p.stringList("payment_method_types");
   if (methods.some((m) => m !== "card")) throw invalid("The local payment stand-in supports card payments only.", "payment_method_types");
 
@@ -127,7 +137,12 @@ const expire: ApiHandler = (ctx, { params, path, source, expand: paths }) => {
 const listLineItems: ApiHandler = (ctx, { params, path }) => {
   params.allowOnly(["ending_before", "expand", "limit", "starting_after"]);
   const session = mustFind(ctx, path.id as string);
-  return { object: "list", data: ctx.store.state.line_items[session.id] ?? [], has_more: false, url: `/v1/checkout/sessions/${session.id}/line_items` };
+  return {
+    object: "list",
+    data: ctx.store.state.line_items[session.id] ?? [],
+    has_more: false,
+    url: `/v1/checkout/sessions/${session.id}/line_items`,
+  };
 };
 
 export const checkoutSessionRoutes: ApiRoute[] = [

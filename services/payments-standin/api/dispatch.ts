@@ -34,7 +34,11 @@ export function createApiHandler(ctx: StandinContext, router: Router<ApiHandler>
       apiKey = authenticate(req);
       const match = router.match(method, url.pathname);
       if (!match) {
-        throw new ApiError(404, "invalid_request_error", `Unrecognized request URL (${method}: ${url.pathname}). The local payment stand-in serves only the endpoints Gradeline uses.`);
+        throw new ApiError(
+          404,
+          "invalid_request_error",
+          `Unrecognized request URL (${method}: ${url.pathname}). The local payment stand-in serves only the endpoints Gradeline uses.`,
+        );
       }
       params = decodeForm(method === "POST" ? await readBody(req) : url.search.slice(1));
       if (key) {

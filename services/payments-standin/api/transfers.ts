@@ -10,7 +10,8 @@ type Ctx = Parameters<ApiHandler>[0];
 
 function checkDestination(ctx: Ctx, destination: string): void {
   const account = ctx.store.state.accounts[destination];
-  if (!account) throw new ApiError(400, "invalid_request_error", `No such destination: '${destination}'`, "resource_missing", "destination");
+  if (!account)
+    throw new ApiError(400, "invalid_request_error", `No such destination: '${destination}'`, "resource_missing", "destination");
   if (!account.payouts_enabled || account.capabilities.transfers !== "active") {
     throw new ApiError(
       400,
@@ -28,7 +29,10 @@ function checkFunds(ctx: Ctx, amount: number, currency: string, source: string |
     const charge = state.charges[source];
     if (!charge) throw noSuch("charge", source, "source_transaction");
     if (charge.currency !== currency) {
-      throw invalid(`The currency of source_transaction's balance transaction (${charge.currency}) must be the same as the transfer currency (${currency}).`, "currency");
+      throw invalid(
+        `The currency of source_transaction's balance transaction (${charge.currency}) must be the same as the transfer currency (${currency}).`,
+        "currency",
+      );
     }
     const left = sourceRemaining(state, source);
     if (amount > left) {

@@ -1,8 +1,4 @@
-export type ApiErrorType =
-  | "api_error"
-  | "card_error"
-  | "idempotency_error"
-  | "invalid_request_error";
+export type ApiErrorType = "api_error" | "card_error" | "idempotency_error" | "invalid_request_error";
 
 /** An error the API answers with `{ error: { type, code, message, param } }`. */
 export class ApiError extends Error {
@@ -16,9 +12,12 @@ export class ApiError extends Error {
     super(message);
   }
 
-  /** Requests refused before they ran are not remembered under their idempotency key. */
+  /**
+   * Handlers validate everything before they change state, so a 4xx here means nothing ran; the live
+   * API does not save such a refusal under the idempotency key, only outcomes (declines, 5xx).
+   */
   get refusedBeforeRunning(): boolean {
-    return this.type === "idempotency_error" || (this.code?.startsWith("parameter_") ?? false);
+    return this.status < 500 && this.status !== 402;
   }
 
   toBody(): { error: Record<string, string> } {

@@ -1,5 +1,5 @@
-import type { StandinState } from "./state";
 import { invalid } from "./errors";
+import type { StandinState } from "./state";
 
 type Obj = Record<string, unknown> & { object?: unknown };
 

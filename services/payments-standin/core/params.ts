@@ -126,7 +126,8 @@ export class ParamReader {
   objectList(key: string, opts: Opts = {}): ParamReader[] {
     return this.list(key, opts).map((item, index) => {
       const name = `${this.name(key)}[${index}]`;
-      if (typeof item !== "object" || item === null || Array.isArray(item)) throw invalid("Invalid object", name, "parameter_invalid_object");
+      if (typeof item !== "object" || item === null || Array.isArray(item))
+        throw invalid("Invalid object", name, "parameter_invalid_object");
       return new ParamReader(item as Params, name);
     });
   }

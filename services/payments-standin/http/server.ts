@@ -32,7 +32,11 @@ export function createRequestListener(ctx: StandinContext) {
       if (method === "POST") return submitOnboarding(ctx, req, res, id);
     }
     if (method === "GET" && path === "/") {
-      return sendHtml(res, 200, messagePage("Payment stand-in running", "This server stands in for the payments API during Gradeline development and tests."));
+      return sendHtml(
+        res,
+        200,
+        messagePage("Payment stand-in running", "This server stands in for the payments API during Gradeline development and tests."),
+      );
     }
     sendHtml(res, 404, messagePage("Not found", "There is nothing at this address."));
   }

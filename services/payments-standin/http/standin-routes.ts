@@ -35,7 +35,9 @@ export async function handleStandinRoute(ctx: StandinContext, req: IncomingMessa
     const raw = url.searchParams.get("seconds") ?? (typeof form.seconds === "string" ? form.seconds : "");
     const seconds = Number(raw);
     if (!Number.isInteger(seconds) || seconds < 0) {
-      return sendJson(res, 400, { error: { type: "invalid_request_error", message: "seconds must be a non-negative integer", param: "seconds" } });
+      return sendJson(res, 400, {
+        error: { type: "invalid_request_error", message: "seconds must be a non-negative integer", param: "seconds" },
+      });
     }
     ctx.store.state.clock_offset += seconds;
     sweepExpiredSessions(ctx);

@@ -9,9 +9,7 @@ export interface CardInput {
 export type CardField = keyof CardInput;
 export type FieldErrors = Partial<Record<CardField, string>>;
 
-export type CardCheck =
-  | { ok: false; errors: FieldErrors }
-  | { ok: true; card: CardDetails; decline: PaymentError | null };
+export type CardCheck = { ok: false; errors: FieldErrors } | { ok: true; card: CardDetails; decline: PaymentError | null };
 
 const DECLINED = { code: "card_declined", decline_code: "generic_decline", message: "Your card was declined." };
 

@@ -20,7 +20,8 @@ function checkLink(ctx: StandinContext, res: ServerResponse, accountId: string, 
   }
   if (link.used || link.expires_at <= ctx.store.now()) {
     if (link.refresh_url) redirect(res, 303, link.refresh_url);
-    else sendHtml(res, 410, messagePage("Link expired", "This onboarding link has expired or was already used. Start again from Gradeline."));
+    else
+      sendHtml(res, 410, messagePage("Link expired", "This onboarding link has expired or was already used. Start again from Gradeline."));
     return undefined;
   }
   return { link, account };

@@ -12,15 +12,25 @@ export interface PayPageProps {
   formError?: string;
 }
 
-function field(name: CardField | "email", label: string, props: PayPageProps, attrs: string, hint?: string): string {
+type FieldName = CardField | "email";
+const FIELD_ORDER: FieldName[] = ["email", "card_number", "exp", "cvc"];
+
+/** After a failed submit, focus lands on the field to fix, so its error is read out with it. */
+function focusTarget(props: PayPageProps): FieldName | undefined {
+  if (props.formError) return "card_number";
+  return FIELD_ORDER.find((name) => props.errors?.[name]);
+}
+
+function field(name: FieldName, label: string, props: PayPageProps, attrs: string, hint?: string): string {
   const error = props.errors?.[name];
+  const focus = focusTarget(props) === name ? " autofocus" : "";
   const value = name === "cvc" ? "" : (props.values?.[name] ?? "");
   const describedBy = [hint ? `${name}-hint` : "", error ? `${name}-error` : "", props.formError ? "form-error" : ""]
     .filter(Boolean)
     .join(" ");
   return `<div class="field">
 <label for="${name}">${esc(label)}</label>
-<input id="${name}" name="${name}" value="${esc(value)}" ${attrs}${error ? ' aria-invalid="true"' : ""}${describedBy ? ` aria-describedby="${describedBy}"` : ""}>
+<input id="${name}" name="${name}" value="${esc(value)}" ${attrs}${focus}${error ? ' aria-invalid="true"' : ""}${describedBy ? ` aria-describedby="${describedBy}"` : ""}>
 ${hint ? `<p class="hint" id="${name}-hint">${esc(hint)}</p>` : ""}
 ${error ? `<p class="field-error" id="${name}-error">${esc(error)}</p>` : ""}
 </div>`;
@@ -30,7 +40,10 @@ export function renderPayPage(props: PayPageProps): string {
   const { session, items } = props;
   const total = formatAmount(session.amount_total, session.currency);
   const lines = items
-    .map((i) => `<li><span>${esc(i.description)}${i.quantity > 1 ? ` × ${i.quantity}` : ""}</span><span>${esc(formatAmount(i.amount_total, i.currency))}</span></li>`)
+    .map(
+      (i) =>
+        `<li><span>${esc(i.description)}${i.quantity > 1 ? ` × ${i.quantity}` : ""}</span><span>${esc(formatAmount(i.amount_total, i.currency))}</span></li>`,
+    )
     .join("");
   const errorCount = Object.keys(props.errors ?? {}).length;
   const alert = props.formError
@@ -54,7 +67,7 @@ export function renderPayPage(props: PayPageProps): string {
 <p class="total"><span>Total</span><span>${esc(total)}</span></p>
 </section>
 <form method="post" action="/pay/${esc(session.id)}" novalidate aria-labelledby="card-heading">
-<h2 id="card-heading">Card details</h2>
+<h2 id="card-heading">Payment details</h2>
 ${alert}
 ${email}
 ${field("card_number", "Card number", props, 'inputmode="numeric" autocomplete="cc-number" placeholder="1234 1234 1234 1234" required', "Test cards: 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined. Any future expiry and any CVC.")}

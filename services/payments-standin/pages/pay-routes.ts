@@ -23,13 +23,26 @@ function closedSession(res: ServerResponse, session: CheckoutSession | undefined
   }
   if (session.status === "expired") {
     const back = session.cancel_url ? { href: session.cancel_url, label: "Back to Gradeline" } : undefined;
-    sendHtml(res, 410, messagePage("This payment link has expired", "The checkout session expired, so it can no longer be paid. Start the purchase again from Gradeline.", back));
+    sendHtml(
+      res,
+      410,
+      messagePage(
+        "This payment link has expired",
+        "The checkout session expired, so it can no longer be paid. Start the purchase again from Gradeline.",
+        back,
+      ),
+    );
     return true;
   }
   if (session.status === "complete") {
     // A second submit (double click, back button) lands where the first one went.
     if (method === "POST") redirect(res, 303, successUrl(session));
-    else sendHtml(res, 200, messagePage("Already paid", "This checkout session has been paid.", { href: successUrl(session), label: "Continue" }));
+    else
+      sendHtml(
+        res,
+        200,
+        messagePage("Already paid", "This checkout session has been paid.", { href: successUrl(session), label: "Continue" }),
+      );
     return true;
   }
   return false;

@@ -1,5 +1,5 @@
-import type { Store } from "../core/store";
 import { newId } from "../core/ids";
+import type { Store } from "../core/store";
 import type { ApiObject, EventRecord } from "../types";
 import { deliverWithRetries, type DeliveryOptions } from "./deliver";
 import { STANDIN_API_VERSION } from "./sign";
@@ -41,7 +41,13 @@ export class EventBus {
         request: { id: source.requestId, idempotency_key: source.idempotencyKey },
         type,
       },
-      delivery: { status: this.delivery.url ? "pending" : "no_endpoint", attempts: 0, last_attempt_at: null, last_status_code: null, last_error: null },
+      delivery: {
+        status: this.delivery.url ? "pending" : "no_endpoint",
+        attempts: 0,
+        last_attempt_at: null,
+        last_status_code: null,
+        last_error: null,
+      },
     };
     this.store.state.events.push(record);
     return { record, firstAttempt: this.send(record, this.delivery.attempts) };
@@ -49,6 +55,7 @@ export class EventBus {
 
   /** Sends a recorded event again (one attempt) and resolves when that attempt is done. */
   async resend(record: EventRecord): Promise<void> {
+    if (!this.delivery.url) return;
     record.delivery.status = "pending";
     await this.send(record, 1);
   }

@@ -43,7 +43,9 @@ export function createSession(stripe: Stripe, extra: Partial<Stripe.Checkout.Ses
   return stripe.checkout.sessions.create(
     {
       mode: "payment",
-      line_items: [{ quantity: 1, price_data: { currency: "usd", unit_amount: 32500, product_data: { name: "Sewer scope report — 12 Elm St" } } }],
+      line_items: [
+        { quantity: 1, price_data: { currency: "usd", unit_amount: 32500, product_data: { name: "Sewer scope report — 12 Elm St" } } },
+      ],
       customer_email: "buyer@example.com",
       client_reference_id: "order_123",
       metadata: { orderId: "order_123" },
@@ -72,5 +74,9 @@ export async function paidSession(h: Harness, extra: Partial<Stripe.Checkout.Ses
 
 export async function standinEvents(h: Harness, type?: string) {
   const res = await fetch(`${h.standin.url}/_standin/events${type ? `?type=${encodeURIComponent(type)}` : ""}`);
-  return ((await res.json()) as { data: Array<{ event: Stripe.Event; delivery: { status: string; attempts: number; last_status_code: number | null } }> }).data;
+  return (
+    (await res.json()) as {
+      data: Array<{ event: Stripe.Event; delivery: { status: string; attempts: number; last_status_code: number | null } }>;
+    }
+  ).data;
 }

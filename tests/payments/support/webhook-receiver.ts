@@ -51,7 +51,8 @@ export async function startWebhookReceiver() {
       for (;;) {
         const found = received.find((w) => w.type === type && match(w));
         if (found) return found;
-        if (Date.now() > deadline) throw new Error(`no ${type} webhook within ${timeoutMs} ms; got ${received.map((w) => w.type).join(", ") || "none"}`);
+        if (Date.now() > deadline)
+          throw new Error(`no ${type} webhook within ${timeoutMs} ms; got ${received.map((w) => w.type).join(", ") || "none"}`);
         await new Promise((r) => setTimeout(r, 20));
       }
     },

@@ -1,0 +1,48 @@
+// npm test: unit and integration tests, then the server and browser tests against a production build.
+import { spawnSync } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+const bin = (name: string) => path.join("node_modules", ".bin", name);
+const run = (cmd: string, args: string[]) => spawnSync(cmd, args, { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } }).status ?? 1;
+
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    if (["node_modules", ".next", ".data", ".git", "tests", "bench"].includes(entry.name)) continue;
+    const full = path.join(dir, entry.name);
+    newest = Math.max(newest, entry.isDirectory() ? newestSource(full) : fs.statSync(full).mtimeMs);
+  }
+  return newest;
+}
+
+function buildIsFresh(): boolean {
+  const id = path.join(".next", "BUILD_ID");
+  return fs.existsSync(id) && fs.statSync(id).mtimeMs >= newestSource(".");
+}
+
+const failures: string[] = [];
+if (run(bin("vitest"), ["run"]) !== 0) failures.push("unit and integration tests");
+
+const haveBrowser = fs.existsSync(CHROMIUM);
+if (!haveBrowser && process.env.REQUIRE_BROWSER === "1") {
+  console.error(`\nChromium was not found at ${CHROMIUM}, and REQUIRE_BROWSER=1 makes the browser tests required (apt-get install -y chromium).`);
+  failures.push("browser tests (no Chromium)");
+} else {
+  if (!haveBrowser) console.log(`\nChromium not found at ${CHROMIUM}: skipping the browser tests (apt-get install -y chromium to run them).`);
+  if (!buildIsFresh()) {
+    console.log("\nBuilding the app for the server tests (next build)...");
+    if (run(bin("next"), ["build"]) !== 0) failures.push("next build");
+  }
+  if (!failures.includes("next build")) {
+    const args = ["run", "--config", "vitest.server.config.mts", ...(haveBrowser ? [] : ["--exclude", "tests/browser/**"])];
+    if (run(bin("vitest"), args) !== 0) failures.push(haveBrowser ? "server and browser tests" : "server tests");
+  }
+}
+
+if (failures.length) {
+  console.error(`\nFailed: ${failures.join(", ")}`);
+  process.exit(1);
+}
+console.log("\nAll test groups passed.");
