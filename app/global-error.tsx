@@ -17,14 +17,13 @@ export default function GlobalError({ error, reset }: { error: Error & { digest?
     <html lang="en" className={fontVariables}>
       <body className="min-h-dvh">
         <main className="mx-auto max-w-2xl px-4 py-24 sm:px-6">
-          <p className="font-serif text-lg font-semibold text-ink">Gradeline</p>
+          <p className="text-ink font-serif text-lg font-semibold">Gradeline</p>
           <h1 className="mt-10 text-4xl font-semibold tracking-[-0.01em]">Something went wrong on our side</h1>
-          <p className="mt-4 text-lg leading-relaxed text-ink-2">
-            The page could not be shown. Try again; if it keeps happening, quote the reference below when you contact
-            us.
+          <p className="text-ink-2 mt-4 text-lg leading-relaxed">
+            The page could not be shown. Try again; if it keeps happening, quote the reference below when you contact us.
           </p>
           {error.digest ? (
-            <p className="mt-4 text-sm text-ink-2">
+            <p className="text-ink-2 mt-4 text-sm">
               Reference <code className="num text-ink">{error.digest}</code>
             </p>
           ) : null}
@@ -32,13 +31,13 @@ export default function GlobalError({ error, reset }: { error: Error & { digest?
             <button
               type="button"
               onClick={reset}
-              className="inline-flex h-10 items-center rounded-md bg-teal px-4 text-[0.9375rem] font-medium text-white hover:bg-teal-dark"
+              className="bg-teal hover:bg-teal-dark inline-flex h-10 items-center rounded-md px-4 text-[0.9375rem] font-medium text-white"
             >
               Try again
             </button>
             <Link
               href="/"
-              className="inline-flex h-10 items-center rounded-md border border-rule-strong bg-white px-4 text-[0.9375rem] font-medium text-ink hover:bg-paper-2"
+              className="border-rule-strong text-ink hover:bg-paper-2 inline-flex h-10 items-center rounded-md border bg-white px-4 text-[0.9375rem] font-medium"
             >
               Back to the start
             </Link>

@@ -19,7 +19,7 @@ export function SkipLink() {
   return (
     <a
       href="#main"
-      className="sr-only z-50 rounded-md bg-teal px-4 py-2 text-sm font-medium text-white focus:not-sr-only focus:fixed focus:top-3 focus:left-3"
+      className="bg-teal sr-only z-50 rounded-md px-4 py-2 text-sm font-medium text-white focus:not-sr-only focus:fixed focus:top-3 focus:left-3"
     >
       Skip to content
     </a>
@@ -27,22 +27,12 @@ export function SkipLink() {
 }
 
 /** The signed-in frame: top bar with logo, role nav and account; a phone menu below lg; main with a max width. */
-export function AppShell({
-  user,
-  nav,
-  homeHref,
-  children,
-}: {
-  user: ShellUser;
-  nav: NavItem[];
-  homeHref?: string;
-  children: ReactNode;
-}) {
+export function AppShell({ user, nav, homeHref, children }: { user: ShellUser; nav: NavItem[]; homeHref?: string; children: ReactNode }) {
   const role = ROLE_LABELS[user.role];
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
-      <header className="relative z-30 border-b border-rule bg-paper print:hidden">
+      <header className="border-rule bg-paper relative z-30 border-b print:hidden">
         <div className="mx-auto flex h-15 max-w-6xl items-stretch gap-8 px-4 sm:px-6">
           <Link href={homeHref ?? nav[0]?.href ?? "/"} className="flex items-center self-center rounded-sm">
             <Logo />
@@ -53,8 +43,8 @@ export function AppShell({
           </nav>
           <div className="ml-auto hidden items-center gap-4 lg:flex">
             <p className="text-right text-sm leading-tight">
-              <span className="block font-medium text-ink">{user.name}</span>
-              <span className="block text-xs text-ink-2">{role}</span>
+              <span className="text-ink block font-medium">{user.name}</span>
+              <span className="text-ink-2 block text-xs">{role}</span>
             </p>
             <SignOutButton className={buttonClasses({ variant: "secondary", size: "sm" })} />
           </div>
@@ -64,8 +54,8 @@ export function AppShell({
             account={
               <div className="flex items-center justify-between gap-4">
                 <p className="min-w-0 text-sm leading-snug">
-                  <span className="block truncate font-medium text-ink">{user.name}</span>
-                  <span className="block truncate text-ink-2">
+                  <span className="text-ink block truncate font-medium">{user.name}</span>
+                  <span className="text-ink-2 block truncate">
                     {role} · {user.email}
                   </span>
                 </p>

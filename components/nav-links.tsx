@@ -30,7 +30,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
               aria-current={active ? "page" : undefined}
               className={clsx(
                 "-mb-px flex items-center border-b-2 px-3 text-sm transition-colors",
-                active ? "border-copper font-medium text-ink" : "border-transparent text-ink-2 hover:border-rule-strong hover:text-ink",
+                active ? "border-copper text-ink font-medium" : "text-ink-2 hover:border-rule-strong hover:text-ink border-transparent",
               )}
             >
               {item.label}
@@ -58,7 +58,7 @@ export function MobileNav({ items, account, className }: { items: NavItem[]; acc
         aria-expanded={open}
         aria-controls={panelId}
         onClick={() => setOpenAt(open ? null : pathname)}
-        className="inline-flex h-10 items-center gap-2 rounded-md border border-rule-strong bg-white px-3 text-sm font-medium text-ink"
+        className="border-rule-strong text-ink inline-flex h-10 items-center gap-2 rounded-md border bg-white px-3 text-sm font-medium"
       >
         <svg viewBox="0 0 16 16" className="size-4" aria-hidden="true">
           {open ? (
@@ -72,10 +72,10 @@ export function MobileNav({ items, account, className }: { items: NavItem[]; acc
       <div
         id={panelId}
         hidden={!open}
-        className="absolute inset-x-0 top-full border-b border-rule bg-paper px-4 pt-2 pb-5 shadow-[0_12px_24px_-16px_rgb(27_36_34/0.35)]"
+        className="border-rule bg-paper absolute inset-x-0 top-full border-b px-4 pt-2 pb-5 shadow-[0_12px_24px_-16px_rgb(27_36_34/0.35)]"
       >
         <nav aria-label="Main">
-          <ul className="divide-y divide-rule border-b border-rule">
+          <ul className="divide-rule border-rule divide-y border-b">
             {items.map((item) => {
               const active = item.href === current;
               return (
@@ -84,15 +84,9 @@ export function MobileNav({ items, account, className }: { items: NavItem[]; acc
                     href={item.href}
                     aria-current={active ? "page" : undefined}
                     onClick={() => setOpenAt(null)}
-                    className={clsx(
-                      "flex min-h-12 items-center gap-3 py-2 text-base",
-                      active ? "font-medium text-ink" : "text-ink-2",
-                    )}
+                    className={clsx("flex min-h-12 items-center gap-3 py-2 text-base", active ? "text-ink font-medium" : "text-ink-2")}
                   >
-                    <span
-                      className={clsx("h-5 w-0.5 rounded-full", active ? "bg-copper" : "bg-transparent")}
-                      aria-hidden="true"
-                    />
+                    <span className={clsx("h-5 w-0.5 rounded-full", active ? "bg-copper" : "bg-transparent")} aria-hidden="true" />
                     {item.label}
                   </Link>
                 </li>

@@ -15,14 +15,14 @@ export function SiteHeader() {
   return (
     <>
       <SkipLink />
-      <header className="border-b border-rule print:hidden">
+      <header className="border-rule border-b print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-8 gap-y-2 px-4 pt-3 pb-2 sm:h-16 sm:flex-nowrap sm:px-6 sm:py-0">
           <Link href="/" className="rounded-sm">
             <Logo />
             <span className="sr-only">, home</span>
           </Link>
           <nav aria-label="Main" className="order-last w-full sm:order-none sm:w-auto">
-            <ul className="flex items-center gap-6 border-t border-rule py-2 sm:border-0 sm:py-0">
+            <ul className="border-rule flex items-center gap-6 border-t py-2 sm:border-0 sm:py-0">
               {links.map((l) => (
                 <li key={l.href}>
                   <Link href={l.href} className={linkClass}>

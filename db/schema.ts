@@ -25,6 +25,7 @@ export const orderStatusEnum = pgEnum("order_status", [
   "refunded",
 ]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
+export const proposalStatusEnum = pgEnum("proposal_status", ["proposed", "confirmed", "declined", "withdrawn"]);
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 
@@ -136,6 +137,7 @@ export const orders = pgTable(
     priceCents: integer("price_cents").notNull(),
     platformFeeCents: integer("platform_fee_cents").notNull(),
     priceLines: jsonb("price_lines").$type<{ label: string; cents: number }[]>().notNull(),
+    atRiskNotifiedAt: timestamp("at_risk_notified_at", { withTimezone: true }),
     appointmentStart: timestamp("appointment_start", { withTimezone: true }),
     appointmentEnd: timestamp("appointment_end", { withTimezone: true }),
     acceptedAt: timestamp("accepted_at", { withTimezone: true }),
@@ -168,6 +170,44 @@ export const orderEvents = pgTable(
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("order_events_order_idx").on(t.orderId, t.at)],
+);
+
+export const appointmentProposals = pgTable(
+  "appointment_proposals",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    inspectorId: uuid("inspector_id")
+      .notNull()
+      .references(() => users.id),
+    start: timestamp("start", { withTimezone: true }).notNull(),
+    end: timestamp("end", { withTimezone: true }).notNull(),
+    status: proposalStatusEnum("status").notNull().default("proposed"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("appointment_proposals_order_idx").on(t.orderId)],
+);
+
+/** Prices of a market, versioned: each change is a new row; orders keep the lines they were priced with. */
+export const priceSettings = pgTable(
+  "price_settings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    market: text("market").notNull(),
+    baseCents: integer("base_cents").notNull(),
+    noCleanoutCents: integer("no_cleanout_cents").notNull(),
+    rushCents: integer("rush_cents").notNull(),
+    extraSewerCents: integer("extra_sewer_cents").notNull(),
+    reuseCents: integer("reuse_cents").notNull(),
+    platformFeeBps: integer("platform_fee_bps").notNull(),
+    reuseInspectorShareBps: integer("reuse_inspector_share_bps").notNull(),
+    sourceNote: text("source_note"),
+    createdBy: uuid("created_by").references(() => users.id),
+    effectiveAt: timestamp("effective_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("price_settings_market_idx").on(t.market, t.effectiveAt)],
 );
 
 export const mailOutbox = pgTable(
@@ -210,3 +250,5 @@ export type Role = (typeof roleEnum.enumValues)[number];
 export type OrderStatus = (typeof orderStatusEnum.enumValues)[number];
 export type Order = typeof orders.$inferSelect;
 export type Listing = typeof listings.$inferSelect;
+export type AppointmentProposal = typeof appointmentProposals.$inferSelect;
+export type PriceSettings = typeof priceSettings.$inferSelect;

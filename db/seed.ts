@@ -6,7 +6,10 @@ import { hashPassword } from "@/lib/auth/password";
 import { DEMO_TOWN, DEMO_USERS, demoOrders } from "@/lib/demo-world";
 
 import { getDb } from "./client";
-import { inspectorProfiles, listings, orderEvents, orders, type OrderStatus, serviceAreas, users } from "./schema";
+import { DEFAULT_PRICES } from "@/lib/pricing-defaults";
+
+import { DEFAULT_MARKET } from "./queries/prices";
+import { inspectorProfiles, listings, orderEvents, orders, type OrderStatus, priceSettings, serviceAreas, users } from "./schema";
 
 export const DEMO_PASSWORD = "gradeline-demo";
 
@@ -48,6 +51,7 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
       }
     }
     const admin = ids.get("admin@gradeline.test")!;
+    await tx.insert(priceSettings).values({ market: DEFAULT_MARKET, ...DEFAULT_PRICES, sourceNote: "Demo market opening prices (invented).", createdBy: admin });
 
     for (const o of demoOrders(now)) {
       const [listing] = await tx

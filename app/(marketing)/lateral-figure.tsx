@@ -13,24 +13,19 @@ const marks = [
 
 export function LateralFigure() {
   return (
-    <figure className="w-full rounded-card border border-rule bg-white shadow-[0_18px_40px_-30px_rgb(27_36_34/0.4)]">
-      <div className="flex items-baseline justify-between gap-4 border-b border-rule px-4 py-2.5 sm:px-5">
-        <span className="text-xs font-semibold tracking-[0.12em] whitespace-nowrap text-ink-2 uppercase">Line profile</span>
-        <span className="num text-xs whitespace-nowrap text-ink-2">
+    <figure className="rounded-card border-rule w-full border bg-white shadow-[0_18px_40px_-30px_rgb(27_36_34/0.4)]">
+      <div className="border-rule flex items-baseline justify-between gap-4 border-b px-4 py-2.5 sm:px-5">
+        <span className="text-ink-2 text-xs font-semibold tracking-[0.12em] whitespace-nowrap uppercase">Line profile</span>
+        <span className="num text-ink-2 text-xs whitespace-nowrap">
           <span className="hidden sm:inline">14 Larch St · </span>80 ft · sample
         </span>
       </div>
-      <svg
-        viewBox="10 0 630 318"
-        className="h-auto w-full px-1 pt-2 sm:px-3"
-        role="img"
-        aria-labelledby="lateral-title lateral-desc"
-      >
+      <svg viewBox="10 0 630 318" className="h-auto w-full px-1 pt-2 sm:px-3" role="img" aria-labelledby="lateral-title lateral-desc">
         <title id="lateral-title">Side view of a building sewer</title>
         <desc id="lateral-desc">
-          The line runs 80 feet from the cleanout beside the house to the public main under the street. Root intrusion is
-          marked at 34 feet (severity 4), a sag from 44 to 50 feet (severity 3), locate marks at 30 and 62 feet with depths
-          of 4.1 and 5.6 feet, and the property line at 56 feet.
+          The line runs 80 feet from the cleanout beside the house to the public main under the street. Root intrusion is marked at 34 feet
+          (severity 4), a sag from 44 to 50 feet (severity 3), locate marks at 30 and 62 feet with depths of 4.1 and 5.6 feet, and the
+          property line at 56 feet.
         </desc>
 
         {/* soil and street */}
@@ -143,9 +138,9 @@ export function LateralFigure() {
           </text>
         </g>
       </svg>
-      <figcaption className="border-t border-rule px-4 py-3 text-sm leading-relaxed text-ink-2 sm:px-5">
-        A lateral as the rated summary draws it: footage from the cleanout, findings by severity, locate marks with depths,
-        and where the city&rsquo;s part begins. Invented example.
+      <figcaption className="border-rule text-ink-2 border-t px-4 py-3 text-sm leading-relaxed sm:px-5">
+        A lateral as the rated summary draws it: footage from the cleanout, findings by severity, locate marks with depths, and where the
+        city&rsquo;s part begins. Invented example.
       </figcaption>
     </figure>
   );

@@ -31,15 +31,15 @@ export function Steps({ headingLevel = "h3" }: { headingLevel?: "h3" | "h2" }) {
   return (
     <ol className="grid gap-x-10 gap-y-8 sm:grid-cols-2 lg:grid-cols-3">
       {STEPS.map((step, i) => (
-        <li key={step.title} className="border-t border-ink pt-4">
-          <p className="num text-sm text-copper" aria-hidden="true">
+        <li key={step.title} className="border-ink border-t pt-4">
+          <p className="num text-copper text-sm" aria-hidden="true">
             {String(i + 1).padStart(2, "0")}
           </p>
           <H className="mt-2 text-lg leading-snug font-semibold">
             <span className="sr-only">Step {i + 1}: </span>
             {step.title}
           </H>
-          <p className="mt-2 text-[0.9375rem] leading-relaxed text-ink-2">{step.text}</p>
+          <p className="text-ink-2 mt-2 text-[0.9375rem] leading-relaxed">{step.text}</p>
         </li>
       ))}
     </ol>

@@ -54,7 +54,7 @@ export function Alert({
   const t = tones[tone];
   const resolvedRole = role === null ? undefined : (role ?? (tone === "danger" ? "alert" : tone === "success" ? "status" : undefined));
   return (
-    <div role={resolvedRole} className={clsx("flex gap-3 rounded-card border px-4 py-3 text-[0.9375rem]", t.box, className)}>
+    <div role={resolvedRole} className={clsx("rounded-card flex gap-3 border px-4 py-3 text-[0.9375rem]", t.box, className)}>
       <svg viewBox="0 0 16 16" className={clsx("mt-0.5 size-5 shrink-0", iconColour[tone])} aria-hidden="true">
         <circle cx="8" cy="8" r="7" fill="none" stroke="currentColor" strokeWidth="1.3" />
         {t.icon}

@@ -36,16 +36,7 @@ type ButtonProps = ComponentProps<"button"> & {
   pending?: boolean;
 };
 
-export function Button({
-  variant,
-  size,
-  pending = false,
-  className,
-  type = "button",
-  disabled,
-  children,
-  ...props
-}: ButtonProps) {
+export function Button({ variant, size, pending = false, className, type = "button", disabled, children, ...props }: ButtonProps) {
   return (
     <button
       type={type}

@@ -45,17 +45,17 @@ export function Caution({
   return (
     <section
       aria-labelledby={headingId}
-      className={clsx("rounded-card border border-rule border-l-4 border-l-copper bg-paper-2/60 px-5 py-5 sm:px-6", className)}
+      className={clsx("rounded-card border-rule border-l-copper bg-paper-2/60 border border-l-4 px-5 py-5 sm:px-6", className)}
     >
       <H id={headingId} className={clsx("flex items-center gap-2 font-semibold", compact ? "text-base" : "text-xl")}>
-        <svg viewBox="0 0 20 20" className="size-5 shrink-0 text-copper" aria-hidden="true">
+        <svg viewBox="0 0 20 20" className="text-copper size-5 shrink-0" aria-hidden="true">
           <path d="M10 2.5 18 17H2L10 2.5Z" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinejoin="round" />
           <path d="M10 8v4.2M10 14.4v.2" stroke="currentColor" strokeWidth="1.7" strokeLinecap="round" />
         </svg>
         {title}
       </H>
       {compact ? (
-        <ul className="mt-3 list-disc space-y-1.5 pl-5 text-sm text-ink-2 marker:text-copper">
+        <ul className="text-ink-2 marker:text-copper mt-3 list-disc space-y-1.5 pl-5 text-sm">
           {CAUTIONS.map((c) => (
             <li key={c.title}>{c.text}</li>
           ))}
@@ -63,9 +63,9 @@ export function Caution({
       ) : (
         <dl className="mt-5 grid gap-x-8 gap-y-5 sm:grid-cols-2">
           {CAUTIONS.map((c) => (
-            <div key={c.title} className="border-t border-rule pt-3">
-              <dt className="text-[0.9375rem] font-semibold text-ink">{c.title}</dt>
-              <dd className="mt-1 text-sm leading-relaxed text-ink-2">{c.text}</dd>
+            <div key={c.title} className="border-rule border-t pt-3">
+              <dt className="text-ink text-[0.9375rem] font-semibold">{c.title}</dt>
+              <dd className="text-ink-2 mt-1 text-sm leading-relaxed">{c.text}</dd>
             </div>
           ))}
         </dl>

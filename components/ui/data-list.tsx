@@ -43,7 +43,7 @@ export function DataList<T>({
   if (rows.length === 0 && empty) return <>{empty}</>;
 
   return (
-    <div className={clsx("md:overflow-x-auto md:rounded-card md:border md:border-rule md:bg-white", className)}>
+    <div className={clsx("md:rounded-card md:border-rule md:overflow-x-auto md:border md:bg-white", className)}>
       <table className="block w-full border-collapse text-[0.9375rem] md:table">
         <caption
           className={clsx(
@@ -53,13 +53,13 @@ export function DataList<T>({
           {caption}
         </caption>
         <thead className="hidden md:table-header-group">
-          <tr className="border-b border-rule bg-paper">
+          <tr className="border-rule bg-paper border-b">
             {columns.map((col) => (
               <th
                 key={col.key}
                 scope="col"
                 className={clsx(
-                  "px-4 py-2.5 text-xs font-semibold tracking-[0.06em] text-ink-2 uppercase",
+                  "text-ink-2 px-4 py-2.5 text-xs font-semibold tracking-[0.06em] uppercase",
                   col.align === "right" ? "text-right" : "text-left",
                 )}
               >
@@ -68,35 +68,23 @@ export function DataList<T>({
             ))}
           </tr>
         </thead>
-        <tbody className="block divide-y divide-rule border-y border-rule md:table-row-group md:border-0">
+        <tbody className="divide-rule border-rule block divide-y border-y md:table-row-group md:border-0">
           {rows.map((row) => (
-            <tr key={rowKey(row)} className="block py-3 md:table-row md:py-0 md:hover:bg-paper/70">
+            <tr key={rowKey(row)} className="md:hover:bg-paper/70 block py-3 md:table-row md:py-0">
               {columns.map((col) => (
                 <td
                   key={col.key}
                   className={clsx(
                     "py-1 md:table-cell md:px-4 md:py-3 md:align-top",
-                    col.hideOnPhone
-                      ? "hidden"
-                      : col.primary
-                        ? "block pb-1.5 font-medium"
-                        : "flex items-baseline justify-between gap-4",
+                    col.hideOnPhone ? "hidden" : col.primary ? "block pb-1.5 font-medium" : "flex items-baseline justify-between gap-4",
                     col.align === "right" ? "md:text-right" : "md:text-left",
                     col.className,
                   )}
                 >
-                  {col.primary ? null : (
-                    <span className="shrink-0 text-sm text-ink-2 md:hidden">
-                      {col.header}
-                    </span>
-                  )}
-                  <span
-                    className={clsx(
-                      "min-w-0",
-                      !col.primary && "text-right",
-                      col.align === "right" ? "md:text-right" : "md:text-left",
-                    )}
-                  >{col.cell(row)}</span>
+                  {col.primary ? null : <span className="text-ink-2 shrink-0 text-sm md:hidden">{col.header}</span>}
+                  <span className={clsx("min-w-0", !col.primary && "text-right", col.align === "right" ? "md:text-right" : "md:text-left")}>
+                    {col.cell(row)}
+                  </span>
                 </td>
               ))}
             </tr>

@@ -39,9 +39,9 @@ export function Field({ label, hint, error, optional, required, id, className, c
 
   return (
     <div className={clsx("space-y-1.5", className)}>
-      <label htmlFor={controlId} className="flex items-baseline gap-2 text-sm font-medium text-ink">
+      <label htmlFor={controlId} className="text-ink flex items-baseline gap-2 text-sm font-medium">
         {label}
-        {optional ? <span className="text-xs font-normal text-ink-2">optional</span> : null}
+        {optional ? <span className="text-ink-2 text-xs font-normal">optional</span> : null}
       </label>
       {children({
         id: controlId,
@@ -50,7 +50,7 @@ export function Field({ label, hint, error, optional, required, id, className, c
         "aria-required": required ? true : undefined,
       })}
       {hint ? (
-        <p id={hintId} className="text-sm text-ink-2">
+        <p id={hintId} className="text-ink-2 text-sm">
           {hint}
         </p>
       ) : null}
@@ -80,9 +80,9 @@ export function Fieldset({
 
   return (
     <fieldset aria-describedby={describedBy} className={clsx("space-y-2", className)}>
-      <legend className="text-sm font-medium text-ink">{legend}</legend>
+      <legend className="text-ink text-sm font-medium">{legend}</legend>
       {hint ? (
-        <p id={hintId} className="-mt-1 text-sm text-ink-2">
+        <p id={hintId} className="text-ink-2 -mt-1 text-sm">
           {hint}
         </p>
       ) : null}
@@ -94,7 +94,7 @@ export function Fieldset({
 
 function FieldError({ id, error }: { id: string; error?: string | null }) {
   return (
-    <p id={id} aria-live="polite" className={clsx("text-sm font-medium text-danger", !error && "sr-only")}>
+    <p id={id} aria-live="polite" className={clsx("text-danger text-sm font-medium", !error && "sr-only")}>
       {error ? (
         <span className="inline-flex items-start gap-1.5">
           <svg viewBox="0 0 16 16" className="mt-0.5 size-4 shrink-0" aria-hidden="true">

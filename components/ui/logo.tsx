@@ -23,7 +23,7 @@ export function Logo({ className, markClassName }: { className?: string; markCla
   return (
     <span className={clsx("inline-flex items-center gap-2.5", className)}>
       <LogoMark className={markClassName} />
-      <span className="font-serif text-[1.3rem] leading-none font-semibold tracking-[-0.01em] text-ink">Gradeline</span>
+      <span className="text-ink font-serif text-[1.3rem] leading-none font-semibold tracking-[-0.01em]">Gradeline</span>
     </span>
   );
 }

@@ -12,7 +12,7 @@ export function Select({ className, children, ...props }: ComponentProps<"select
       </select>
       <svg
         viewBox="0 0 16 16"
-        className="pointer-events-none absolute top-1/2 right-3 size-4 -translate-y-1/2 text-ink-2"
+        className="text-ink-2 pointer-events-none absolute top-1/2 right-3 size-4 -translate-y-1/2"
         aria-hidden="true"
       >
         <path d="m4 6 4 4 4-4" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" />

@@ -28,15 +28,7 @@ function clampSeverity(n: number): Severity {
 }
 
 /** Number + word, in the severity colours. Reads "Severity 4 of 5, Serious" to a screen reader. */
-export function SeverityBadge({
-  severity,
-  size = "md",
-  className,
-}: {
-  severity: number;
-  size?: "sm" | "md" | "lg";
-  className?: string;
-}) {
+export function SeverityBadge({ severity, size = "md", className }: { severity: number; size?: "sm" | "md" | "lg"; className?: string }) {
   const s = clampSeverity(severity);
   return (
     <span
@@ -79,7 +71,7 @@ export function SeverityScale({ current, className }: { current?: number; classN
           className={clsx(
             "flex min-w-0 flex-col gap-1.5 rounded-sm border px-1.5 pt-1.5 pb-2 text-xs sm:px-2 sm:text-sm",
             styles[s].soft,
-            active === s && "ring-2 ring-ink ring-offset-1 ring-offset-paper",
+            active === s && "ring-ink ring-offset-paper ring-2 ring-offset-1",
           )}
         >
           <span className={clsx("h-1 rounded-full", styles[s].bar)} aria-hidden="true" />

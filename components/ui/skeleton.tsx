@@ -2,7 +2,7 @@ import clsx from "clsx";
 
 /** A placeholder block while content loads. Pair with one visible or sr-only "Loading ..." text per region. */
 export function Skeleton({ className }: { className?: string }) {
-  return <div aria-hidden="true" className={clsx("rounded-sm bg-paper-2 motion-safe:animate-pulse", className)} />;
+  return <div aria-hidden="true" className={clsx("bg-rule/55 rounded-sm motion-safe:animate-pulse", className)} />;
 }
 
 export function SkeletonText({ lines = 3, className }: { lines?: number; className?: string }) {

@@ -28,7 +28,8 @@ function base(method: CostedMethod, lengthFt: number, basis: CostBasis, rates: R
   const feet = Math.max(lengthFt, rate.minimumFt);
   const band = depthBand(rates, basis.depthFt);
   const surface = rates.surfaces[basis.surface];
-  const factor = kind === "excavation" ? band.excavation * surface.excavation : kind === "trenchless" ? band.trenchless * surface.trenchless : 1;
+  const factor =
+    kind === "excavation" ? band.excavation * surface.excavation : kind === "trenchless" ? band.trenchless * surface.trenchless : 1;
   const restoration = kind === "excavation" ? surface.restoration : { lowCents: 0, highCents: 0 };
   return {
     low: (rate.fixed.lowCents + rate.perFoot.lowCents * feet) * factor + restoration.lowCents,

@@ -33,7 +33,10 @@ export function crossCheck(places: RecordPlaces, unit: string, problems: Problem
   segments.forEach((s, i) => {
     if (!s) return;
     if (i === 0 && Math.abs(s.from) > FOOTAGE_EPSILON) {
-      problems.push({ path: "segments[0].from", message: `the first segment must start at 0 (the access point), not at ${fmt(s.from)} ${u}` });
+      problems.push({
+        path: "segments[0].from",
+        message: `the first segment must start at 0 (the access point), not at ${fmt(s.from)} ${u}`,
+      });
     }
     if (s.to <= s.from + FOOTAGE_EPSILON) {
       problems.push({ path: `segments[${i}].to`, message: `must be past the segment's start (${fmt(s.from)} ${u})` });
@@ -41,9 +44,15 @@ export function crossCheck(places: RecordPlaces, unit: string, problems: Problem
     const prev = i > 0 ? segments[i - 1] : undefined;
     if (!prev) return;
     if (s.from > prev.to + FOOTAGE_EPSILON) {
-      problems.push({ path: `segments[${i}].from`, message: `gap: segments[${i - 1}] ends at ${fmt(prev.to)} ${u} but this one starts at ${fmt(s.from)} ${u}` });
+      problems.push({
+        path: `segments[${i}].from`,
+        message: `gap: segments[${i - 1}] ends at ${fmt(prev.to)} ${u} but this one starts at ${fmt(s.from)} ${u}`,
+      });
     } else if (s.from < prev.to - FOOTAGE_EPSILON) {
-      problems.push({ path: `segments[${i}].from`, message: `overlap: segments[${i - 1}] runs to ${fmt(prev.to)} ${u} but this one starts at ${fmt(s.from)} ${u}` });
+      problems.push({
+        path: `segments[${i}].from`,
+        message: `overlap: segments[${i - 1}] runs to ${fmt(prev.to)} ${u} but this one starts at ${fmt(s.from)} ${u}`,
+      });
     }
   });
 
@@ -70,7 +79,10 @@ export function crossCheck(places: RecordPlaces, unit: string, problems: Problem
       }
     }
     if (f.type === "sag" && f.waterDepthPct === null) {
-      problems.push({ path: `findings[${i}].waterDepthPct`, message: "a sag needs the depth of its standing water as a share of the diameter (0 when it holds none)" });
+      problems.push({
+        path: `findings[${i}].waterDepthPct`,
+        message: "a sag needs the depth of its standing water as a share of the diameter (0 when it holds none)",
+      });
     }
     if (f.type !== "sag" && f.waterDepthPct !== null) {
       problems.push({ path: `findings[${i}].waterDepthPct`, message: "only a sag records standing water; leave it empty here" });
@@ -81,11 +93,17 @@ export function crossCheck(places: RecordPlaces, unit: string, problems: Problem
   (places.locates ?? []).forEach((l, i) => {
     if (!l) return;
     if (limit !== undefined && l.at > limit + FOOTAGE_EPSILON) {
-      problems.push({ path: `locates[${i}].at`, message: `${fmt(l.at)} ${u} is past the end of the survey (${fmt(limit)} ${u}); the sonde cannot be located where the camera did not go` });
+      problems.push({
+        path: `locates[${i}].at`,
+        message: `${fmt(l.at)} ${u} is past the end of the survey (${fmt(limit)} ${u}); the sonde cannot be located where the camera did not go`,
+      });
     }
     for (const [at, j] of seen) {
       if (Math.abs(at - l.at) <= FOOTAGE_EPSILON) {
-        problems.push({ path: `locates[${i}].at`, message: `locates[${j}] is already at ${fmt(l.at)} ${u}; two marks at one footage give no grade` });
+        problems.push({
+          path: `locates[${i}].at`,
+          message: `locates[${j}] is already at ${fmt(l.at)} ${u}; two marks at one footage give no grade`,
+        });
         return;
       }
     }

@@ -27,7 +27,12 @@ export const FINDING_TYPES = {
   // A sag is a fault of alignment (IPC 704.1 asks for uniform slope), so structural,
   // even though what the owner notices is the standing water.
   sag: { word: "sag", label: "Sag (belly)", plural: "sags", group: "structural" },
-  poor_connection: { word: "poor connection to the main", label: "Poor connection to the main", plural: "poor connections", group: "structural" },
+  poor_connection: {
+    word: "poor connection to the main",
+    label: "Poor connection to the main",
+    plural: "poor connections",
+    group: "structural",
+  },
   // Corrosion takes wall off iron pipe; the scale it leaves is the visible part of that loss.
   corrosion_or_scale: { word: "corrosion or scale", label: "Corrosion or scale", plural: "corroded stretches", group: "structural" },
   roots: { word: "roots", label: "Roots", plural: "root intrusions", group: "service" },
@@ -48,13 +53,7 @@ export const findingLabel = (type: FindingType): string => FINDING_TYPES[type].l
 export const findingWord = (type: FindingType): string => FINDING_TYPES[type].word;
 
 /** Things a cleaning crew removes before any liner goes in. */
-export const CLEARED_BEFORE_LINING: readonly FindingType[] = [
-  "roots",
-  "deposits",
-  "grease",
-  "obstruction",
-  "corrosion_or_scale",
-];
+export const CLEARED_BEFORE_LINING: readonly FindingType[] = ["roots", "deposits", "grease", "obstruction", "corrosion_or_scale"];
 
 /** Types whose lossPct is a share of the cross-section lost. */
 export const LOSS_OF_AREA_TYPES: readonly FindingType[] = ["roots", "deposits", "grease", "obstruction", "corrosion_or_scale"];

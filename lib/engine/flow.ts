@@ -36,7 +36,7 @@ export function manningVelocity({ diameter, depthRatio, slope, n, k = MANNING_K_
 }
 
 export function manningFlow(input: FlowInput): number {
-  const area = areaFraction(input.depthRatio) * (Math.PI * input.diameter * input.diameter) / 4;
+  const area = (areaFraction(input.depthRatio) * (Math.PI * input.diameter * input.diameter)) / 4;
   return manningVelocity(input) * area;
 }
 

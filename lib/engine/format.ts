@@ -1,5 +1,5 @@
-import type { Finding } from "./record";
 import { findingWord } from "./finding-types";
+import type { Finding } from "./record";
 
 const tenth = (v: number) => Math.round(v * 10) / 10;
 
@@ -14,6 +14,9 @@ export const wallText = (v: number): string => `${Math.round(v * 1000) / 1000} i
 export const pctText = (v: number): string => `${Math.round(v)} %`;
 
 export const inText = (v: number): string => `${Math.round(v * 100) / 100} in`;
+
+/** A pipe size used as an adjective: "4-in pipe". */
+export const sizeText = (v: number): string => `${Math.round(v * 100) / 100}-in`;
 
 export function dollarsText(cents: number): string {
   return `$${Math.round(cents / 100).toLocaleString("en-US")}`;

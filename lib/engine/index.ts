@@ -16,7 +16,15 @@ export { FINDING_TYPES, FINDING_TYPE_IDS, findingGroup, findingLabel, type Findi
 export * from "./vocabulary";
 export type { Basis } from "./basis";
 export { lineLengths, sideAt, type Lengths, type MaterialLength } from "./geometry";
-export { DEFAULT_SLOPE_RULES, IPC_704_1, SLOPE_RULE_SETS, SlopeRuleSetSchema, UPC_708_1, minimumSlope, type SlopeRuleSet } from "./slope-rules";
+export {
+  DEFAULT_SLOPE_RULES,
+  IPC_704_1,
+  SLOPE_RULE_SETS,
+  SlopeRuleSetSchema,
+  UPC_708_1,
+  minimumSlope,
+  type SlopeRuleSet,
+} from "./slope-rules";
 export { gradeBetween, sondeDepthFromNulls, type GradeBetweenMarks } from "./slope";
 export { areaFilledPct, areaFraction, hydraulicRadiusRatio, wettedPerimeterRatio } from "./pipe-section";
 export { fullFlowGpm, manningFlow, manningVelocity, partFullRatios } from "./flow";

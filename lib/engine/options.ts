@@ -17,7 +17,14 @@ export interface ResolvedOptions {
 // A table checked once need not be checked on every evaluation; callers pass the same object.
 const checked = new WeakSet<object>([DEMO_RATE_TABLE, ...Object.values(SLOPE_RULE_SETS)]);
 
-function check<T extends object>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } } }, value: T, prefix: string[], problems: Problem[]): T {
+function check<T extends object>(
+  schema: {
+    safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } };
+  },
+  value: T,
+  prefix: string[],
+  problems: Problem[],
+): T {
   if (checked.has(value)) return value;
   const r = schema.safeParse(value);
   if (r.success) {
@@ -35,7 +42,11 @@ export function resolveOptions(options: EvaluateOptions | undefined, problems: P
   if (typeof j === "string") {
     const found = SLOPE_RULE_SETS[j];
     if (found) slopeRules = found;
-    else problems.push({ path: "options.jurisdiction", message: `no slope rule set "${j}"; known: ${Object.keys(SLOPE_RULE_SETS).join(", ")}` });
+    else
+      problems.push({
+        path: "options.jurisdiction",
+        message: `no slope rule set "${j}"; known: ${Object.keys(SLOPE_RULE_SETS).join(", ")}`,
+      });
   } else if (j !== undefined) {
     slopeRules = check(SlopeRuleSetSchema, j, ["options", "jurisdiction"], problems);
   }

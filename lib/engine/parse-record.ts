@@ -1,4 +1,5 @@
 import type { z } from "zod";
+
 import { crossCheck, type RecordPlaces } from "./cross-checks";
 import { metricToImperial } from "./metric";
 import { formatPath, type Problem } from "./problems";
@@ -6,9 +7,7 @@ import { InspectionRecordSchema, MetricInspectionRecordSchema, type InspectionRe
 
 export type SourceUnits = "imperial" | "metric";
 
-export type ParseResult =
-  | { ok: true; record: InspectionRecord; sourceUnits: SourceUnits }
-  | { ok: false; problems: Problem[] };
+export type ParseResult = { ok: true; record: InspectionRecord; sourceUnits: SourceUnits } | { ok: false; problems: Problem[] };
 
 type AnySchema = typeof InspectionRecordSchema | typeof MetricInspectionRecordSchema;
 

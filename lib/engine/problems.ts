@@ -17,7 +17,9 @@ export function formatPath(path: readonly PropertyKey[]): string {
 export class RecordProblemsError extends Error {
   readonly problems: Problem[];
   constructor(problems: Problem[]) {
-    super(`The inspection record has ${problems.length} problem${problems.length === 1 ? "" : "s"}: ${problems.map((p) => `${p.path}: ${p.message}`).join("; ")}`);
+    super(
+      `The inspection record has ${problems.length} problem${problems.length === 1 ? "" : "s"}: ${problems.map((p) => `${p.path}: ${p.message}`).join("; ")}`,
+    );
     this.name = "RecordProblemsError";
     this.problems = problems;
   }

@@ -1,14 +1,8 @@
 import { z } from "zod";
+
 import { SURFACES, type Surface } from "./vocabulary";
 
-export const REPAIR_METHODS = [
-  "no_action",
-  "clean_and_recheck",
-  "spot_repair",
-  "lining",
-  "pipe_bursting",
-  "excavate_replace",
-] as const;
+export const REPAIR_METHODS = ["no_action", "clean_and_recheck", "spot_repair", "lining", "pipe_bursting", "excavate_replace"] as const;
 export type RepairMethod = (typeof REPAIR_METHODS)[number];
 export type CostedMethod = Exclude<RepairMethod, "no_action">;
 export const COSTED_METHODS = REPAIR_METHODS.filter((m): m is CostedMethod => m !== "no_action");
@@ -66,7 +60,9 @@ export const RateTableSchema = z.object({
     .array(DepthBandSchema)
     .min(1)
     .refine((b) => b[0].fromFt === 0, { error: "the first depth band must start at 0 ft" })
-    .refine((b) => b.every((band, i) => i === 0 || band.fromFt > b[i - 1].fromFt), { error: "depth bands must go deeper one after another" }),
+    .refine((b) => b.every((band, i) => i === 0 || band.fromFt > b[i - 1].fromFt), {
+      error: "depth bands must go deeper one after another",
+    }),
   surfaces: z.object(Object.fromEntries(SURFACES.map((s) => [s, SurfaceRateSchema])) as Record<Surface, typeof SurfaceRateSchema>),
   /** Depth used where no locate mark gives one. */
   assumedDepthFt: z.number().min(0),
@@ -91,7 +87,8 @@ export const DEMO_RATE_TABLE: RateTable = {
   name: "Demo rates (invented)",
   currency: "USD",
   effectiveDate: "2026-01-15",
-  source: "Demo values invented for the demo world, kept within the sanity bounds of municipal lateral-repair guidance (California, read 2026). Not a quote.",
+  source:
+    "Demo values invented for the demo world, kept within the sanity bounds of municipal lateral-repair guidance (California, read 2026). Not a quote.",
   demo: true,
   methods: {
     clean_and_recheck: { fixed: range(350, 750), perFoot: range(2, 5), minimumFt: 0 },

@@ -81,25 +81,29 @@ export function rate(record: InspectionRecord): Rating {
   const lifted = Math.min(agg.meanGrade, peak + DENSITY_LIFT, DENSITY_CEILING);
   let severity = Math.max(peak, lifted);
   const reasons: string[] = [];
-  if (worst) reasons.push(`the worst finding is the ${describe(worst)}`);
-  else reasons.push("no defects were recorded");
-  if (lifted > peak) reasons.push(`the defects are close together: ${Math.round(agg.mean)} points per 100 ft`);
-
-  const collapse = findings.find((f) => f.type === "collapse");
-  if (collapse) {
-    severity = 5;
-    reasons.unshift(`the pipe has collapsed at ${ft(collapse.at)}`);
-  }
+  const named = new Set<Finding>();
   if (STOPPED_IN_LINE.includes(surveyEnd.reason)) {
     const stopper = findings.find((f) => f.grade >= 3 && (f.to ?? f.at) >= surveyEnd.at - STOP_NEAR_FT);
     if (stopper) {
       severity = 5;
-      reasons.unshift(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}, at the ${describe(stopper)}`);
+      named.add(stopper);
+      reasons.push(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}, at the ${describe(stopper)}`);
     } else {
       // practice: an unseen remainder is never rated better than Moderate.
       severity = Math.max(severity, 3);
-      reasons.push(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}: the rest of the line was not seen`);
     }
+  }
+  const collapse = findings.find((f) => f.type === "collapse");
+  if (collapse) {
+    severity = 5;
+    if (!named.has(collapse)) reasons.push(`the pipe has collapsed at ${ft(collapse.at)}`);
+    named.add(collapse);
+  }
+  if (worst && !named.has(worst)) reasons.push(`the worst finding is the ${describe(worst)}`);
+  if (!worst) reasons.push("no defects were recorded");
+  if (lifted > peak) reasons.push(`there are many defects for the length of line (${Math.round(agg.mean)} points per 100 ft)`);
+  if (STOPPED_IN_LINE.includes(surveyEnd.reason) && reasons.length > 0 && named.size === 0) {
+    reasons.push(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}: the rest of the line was not seen`);
   }
   const s = clampSeverity(severity);
   return {

@@ -1,12 +1,12 @@
 import { z } from "zod";
+
 import { FINDING_TYPE_IDS } from "./finding-types";
 import { ACCESS_KINDS, MATERIALS, SURFACES, SURVEY_END_REASONS } from "./vocabulary";
 
 // "3", "12", "2-4", "10 to 2": an hour on the pipe's clock face seen looking downstream.
 const CLOCK = /^(1[0-2]|0?[1-9])(\s*(-|to)\s*(1[0-2]|0?[1-9]))?$/;
 
-const distance = (unit: string) =>
-  z.number({ error: `must be a distance in ${unit}` }).min(0, { error: "cannot be negative" });
+const distance = (unit: string) => z.number({ error: `must be a distance in ${unit}` }).min(0, { error: "cannot be negative" });
 
 const percent = z
   .number({ error: "must be a percentage" })

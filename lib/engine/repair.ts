@@ -1,8 +1,8 @@
-import { methodCost, costBasis } from "./costs";
+import { costBasis, methodCost } from "./costs";
 import { describeFinding, listText } from "./format";
 import { linerWall, type LinerWall } from "./liner";
-import type { InspectionRecord } from "./record";
 import { REPAIR_METHODS, type MoneyRange, type RateTable, type RepairMethod } from "./rates";
+import type { InspectionRecord } from "./record";
 import { burstingFit, cleanFit, excavateFit, liningFit, noActionFit, spotFit, type Fit } from "./repair-rules";
 import { stretchFacts, type StretchFacts } from "./stretches";
 import type { Material, Side, Surface } from "./vocabulary";
@@ -113,7 +113,10 @@ export function repairStretches(record: InspectionRecord, rates: RateTable): Str
       surfaceAssumed: basis.surfaceAssumed,
       options,
       suggested: suggest(options),
-      note: facts.side === "public" ? "Public side: this part belongs to the city or utility, which decides the repair. Report it to them." : null,
+      note:
+        facts.side === "public"
+          ? "Public side: this part belongs to the city or utility, which decides the repair. Report it to them."
+          : null,
     };
   });
 }

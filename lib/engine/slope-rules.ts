@@ -1,4 +1,5 @@
 import { z } from "zod";
+
 import { BASES, type Basis } from "./basis";
 
 /** An exact slope in inches of fall per foot of run, kept as a fraction so the code's figure is never rounded. */
@@ -36,7 +37,9 @@ export const SlopeRuleSetSchema = z.object({
       }),
     )
     .min(1)
-    .refine((rows) => rows[rows.length - 1].belowDiameterIn === null, { error: "the last row must cover every larger diameter (belowDiameterIn: null)" }),
+    .refine((rows) => rows[rows.length - 1].belowDiameterIn === null, {
+      error: "the last row must cover every larger diameter (belowDiameterIn: null)",
+    }),
 });
 
 export const inPerFt = (f: InchesPerFoot): number => f.num / f.den;

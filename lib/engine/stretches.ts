@@ -1,7 +1,7 @@
 import { findingGroup, type FindingType } from "./finding-types";
-import { segmentsOverlapping } from "./geometry";
-import type { Finding, InspectionRecord, Locate } from "./record";
+import { segmentsOverlapping, sideAt } from "./geometry";
 import { STOP_NEAR_FT } from "./rating";
+import type { Finding, InspectionRecord, Locate } from "./record";
 import { depthAt, sortedLocates, surfaceAt } from "./slope";
 import { STOPPED_IN_LINE, type Material, type Side, type Surface } from "./vocabulary";
 
@@ -15,7 +15,7 @@ export const MERGE_GAP_FT = 5;
 // practice: where no deformation was measured, a liner design assumes 2 % ovality.
 export const ASSUMED_OVALITY_PCT = 2;
 
-// The costlier the surface to open, the later in this list.
+// practice: the costlier the surface to open, the later in this list; a stretch is priced by its worst.
 const SURFACE_ORDER: readonly Surface[] = ["soil", "hardscape", "under_building", "street"];
 
 export interface StretchFacts {
@@ -79,7 +79,10 @@ export function workSpans(record: InspectionRecord): Span[] {
   return merged.sort((x, y) => x.from - y.from);
 }
 
-function worstSurface(marks: readonly Locate[], from: number, to: number): Surface | null {
+function worstSurface(all: readonly Locate[], from: number, to: number, side: Side, boundary: number | null): Surface | null {
+  // practice: the ground on the owner's side says nothing about the street past the boundary.
+  const sameSide = all.filter((m) => sideAt(m.at, boundary) === side);
+  const marks = sameSide.length > 0 ? sameSide : all;
   const seen = [surfaceAt(marks, from), surfaceAt(marks, to), ...marks.filter((m) => m.at > from && m.at < to).map((m) => m.surface)];
   let worst: Surface | null = null;
   for (const s of seen) if (s !== null && (worst === null || SURFACE_ORDER.indexOf(s) > SURFACE_ORDER.indexOf(worst))) worst = s;
@@ -115,7 +118,7 @@ export function stretchFacts(record: InspectionRecord): StretchFacts[] {
       materials: [...new Set(segs.map((s) => s.material))],
       diameters: [...new Set(segs.map((s) => s.diameterIn))],
       depthFt: deepest(marks, span.from, span.to),
-      surface: worstSurface(marks, span.from, span.to),
+      surface: worstSurface(marks, span.from, span.to, span.side, record.boundaryAt),
       ovalityPct: deformations.length > 0 ? Math.max(...deformations.map((f) => f.lossPct ?? 0)) : ASSUMED_OVALITY_PCT,
       ovalityMeasured: deformations.length > 0,
       stoppedHere: stopped && span.to >= surveyEnd.at - STOP_NEAR_FT,

@@ -23,13 +23,7 @@ export const MATERIAL_LABELS: Record<Material, string> = {
   unknown: "unknown material",
 };
 
-export const ACCESS_KINDS = [
-  "cleanout_inside",
-  "cleanout_outside",
-  "toilet_removed",
-  "roof_vent",
-  "other",
-] as const;
+export const ACCESS_KINDS = ["cleanout_inside", "cleanout_outside", "toilet_removed", "roof_vent", "other"] as const;
 export type AccessKind = (typeof ACCESS_KINDS)[number];
 
 export const ACCESS_LABELS: Record<AccessKind, string> = {
@@ -40,13 +34,7 @@ export const ACCESS_LABELS: Record<AccessKind, string> = {
   other: "the access point",
 };
 
-export const SURVEY_END_REASONS = [
-  "reached_main",
-  "blocked",
-  "could_not_pass",
-  "cable_end",
-  "other",
-] as const;
+export const SURVEY_END_REASONS = ["reached_main", "blocked", "could_not_pass", "cable_end", "other"] as const;
 export type SurveyEndReason = (typeof SURVEY_END_REASONS)[number];
 
 export const SURVEY_END_LABELS: Record<SurveyEndReason, string> = {

@@ -101,3 +101,13 @@ export function signedDownloadUrl(key: string, opts: { expiresIn?: number; conte
     { expiresIn: opts.expiresIn ?? 600 },
   );
 }
+
+export async function objectSize(key: string): Promise<number | null> {
+  const { HeadObjectCommand } = await import("@aws-sdk/client-s3");
+  try {
+    const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+    return head.ContentLength ?? null;
+  } catch {
+    return null;
+  }
+}

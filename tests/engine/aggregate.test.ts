@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { aggregate, bandGrade } from "../../lib/engine";
 import { windowPeak } from "../../lib/engine/aggregate";
 
@@ -43,7 +44,16 @@ describe("peak-and-mean aggregation, checked against a published method's worked
   });
 
   it("with no peak window the peak is the largest single score", () => {
-    const a = aggregate({ items: [{ at: 0, score: 3 }, { at: 0.1, score: 8 }], length: 100, meanPer: 100, peakBands: [1, 3, 8, 20], meanBands: [5, 15, 40, 80] });
+    const a = aggregate({
+      items: [
+        { at: 0, score: 3 },
+        { at: 0.1, score: 8 },
+      ],
+      length: 100,
+      meanPer: 100,
+      peakBands: [1, 3, 8, 20],
+      meanBands: [5, 15, 40, 80],
+    });
     expect(a.peak).toBe(8);
     expect(a.peakGrade).toBe(3);
     expect(a.mean).toBeCloseTo(11, 12);

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { fullFlowGpm, manningFlow, manningVelocity, partFullRatios } from "../../lib/engine";
 import { CFS_TO_GPM, DESIGN_MANNING_N, MANNING_K_SI } from "../../lib/engine/flow";
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { evaluate } from "../../lib/engine";
 import { plainLine } from "./fixtures/records";
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { linerWall, minStiffnessThickness, ovalityFactor, partlyDeterioratedThickness } from "../../lib/engine";
 import { INSTALLED_WALL_SHARE, liningStandardFor, PSI_PER_FT_OF_WATER } from "../../lib/engine/liner";
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { evaluate, parseRecord } from "../../lib/engine";
 import { nominalDiameterIn } from "../../lib/engine/metric";
 import metric from "./fixtures/metric-clay.json";

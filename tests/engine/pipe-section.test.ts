@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+
 import { areaFilledPct, areaFraction, hydraulicRadiusRatio, wettedPerimeterRatio } from "../../lib/engine";
 
 // derived: r = d/D, theta = 2 arccos(1 - 2r); A/(pi D^2/4) = (theta - sin theta)/(2 pi);

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { evaluate, FINDING_TYPES, parseRecord, rate, SEVERITY_LABELS, type RecordInput } from "../../lib/engine";
 import { POINTS_BY_GRADE, scoredItems } from "../../lib/engine/rating";
 import { plainLine, withFindings } from "./fixtures/records";

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+
 import { parseRecord, type Problem } from "../../lib/engine";
 import { plainLine, withFindings } from "./fixtures/records";
 
@@ -118,7 +119,9 @@ describe("parseRecord refuses a bad record with every problem and its path", () 
       ],
       locates: [{ at: 10, depthFt: -1, surface: "soil" }],
     };
-    expect(paths(record).sort()).toEqual(["findings[0].grade", "findings[1].at", "locates[0].depthFt", "segments[1].from", "surveyEnd.reason"].sort());
+    expect(paths(record).sort()).toEqual(
+      ["findings[0].grade", "findings[1].at", "locates[0].depthFt", "segments[1].from", "surveyEnd.reason"].sort(),
+    );
   });
 
   it("every problem has a plain message", () => {

@@ -1,9 +1,15 @@
 import { describe, expect, it } from "vitest";
+
 import { evaluate, gradeBetween, IPC_704_1, minimumSlope, sondeDepthFromNulls, UPC_708_1, type SlopeRuleSet } from "../../lib/engine";
 import { fractionText, inPerFt } from "../../lib/engine/slope-rules";
 import { plainLine } from "./fixtures/records";
 
-const mark = (at: number, depthFt: number, groundElevationFt: number | null = null) => ({ at, depthFt, groundElevationFt, surface: "soil" as const });
+const mark = (at: number, depthFt: number, groundElevationFt: number | null = null) => ({
+  at,
+  depthFt,
+  groundElevationFt,
+  surface: "soil" as const,
+});
 
 describe("minimum slope, International Plumbing Code Table 704.1 (published)", () => {
   it.each([
@@ -98,7 +104,13 @@ describe("grade between locate marks (derived: elevation = ground - depth; grade
   });
 
   it("accepts a jurisdiction's own rule set beside the built-in ones", () => {
-    const strict: SlopeRuleSet = { id: "town", name: "Town rule", source: "Invented test rule", basis: "practice", rows: [{ belowDiameterIn: null, minimum: { num: 1, den: 2 } }] };
+    const strict: SlopeRuleSet = {
+      id: "town",
+      name: "Town rule",
+      source: "Invented test rule",
+      basis: "practice",
+      rows: [{ belowDiameterIn: null, minimum: { num: 1, den: 2 } }],
+    };
     const e = evaluate(plainLine(), { jurisdiction: strict });
     expect(e.slopeRules.id).toBe("town");
     expect(e.grades.every((g) => g.minimumInPerFt === 0.5 && !g.meetsMinimum)).toBe(true);

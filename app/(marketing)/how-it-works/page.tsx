@@ -56,20 +56,22 @@ const repairs = [
     when: "Cracks and root entry along a line that still holds its shape; ruled out where water stands over a quarter of the diameter, or at a collapse.",
   },
   { name: "Pipe bursting", when: "Replacing a run without a trench, where the line and the soil allow it; ruled out at a collapse." },
-  { name: "Excavation and replacement", when: "Collapses, deep sags, or where nothing else fits; favoured less under concrete or a street." },
+  {
+    name: "Excavation and replacement",
+    when: "Collapses, deep sags, or where nothing else fits; favored less under concrete or a street.",
+  },
 ];
 
 export default function HowItWorksPage() {
   return (
     <div className="mx-auto max-w-6xl px-4 pt-14 sm:px-6 sm:pt-20">
       <header className="max-w-3xl">
-        <p className="text-xs font-semibold tracking-[0.14em] text-copper uppercase">How it works</p>
+        <p className="text-copper text-xs font-semibold tracking-[0.14em] uppercase">How it works</p>
         <h1 className="mt-3 text-4xl leading-tight font-semibold tracking-[-0.01em] sm:text-5xl">
           From the order to a rated summary, inside the contingency
         </h1>
-        <p className="mt-5 text-lg leading-relaxed text-ink-2">
-          Every order follows the same path, and everyone involved sees where it stands: open, accepted, scheduled,
-          delivered, unlocked.
+        <p className="text-ink-2 mt-5 text-lg leading-relaxed">
+          Every order follows the same path, and everyone involved sees where it stands: open, accepted, scheduled, delivered, unlocked.
         </p>
       </header>
 
@@ -80,51 +82,49 @@ export default function HowItWorksPage() {
         <Steps />
       </section>
 
-      <section aria-labelledby="records-title" className="mt-20 border-t border-rule pt-14">
+      <section aria-labelledby="records-title" className="border-rule mt-20 border-t pt-14">
         <div className="grid gap-10 lg:grid-cols-[minmax(0,2fr)_minmax(0,5fr)]">
           <div>
             <h2 id="records-title" className="text-3xl leading-tight font-semibold">
               What the inspector records
             </h2>
-            <p className="mt-3 text-[0.9375rem] leading-relaxed text-ink-2">
-              All distances are footage from the zero point at the access point. The rated summary is built from these
-              records alone.
+            <p className="text-ink-2 mt-3 text-[0.9375rem] leading-relaxed">
+              All distances are footage from the zero point at the access point. The rated summary is built from these records alone.
             </p>
           </div>
-          <dl className="divide-y divide-rule border-y border-rule">
+          <dl className="divide-rule border-rule divide-y border-y">
             {records.map((r) => (
               <div key={r.term} className="grid gap-1 py-4 sm:grid-cols-[12rem_1fr] sm:gap-6">
                 <dt className="font-serif text-lg font-semibold">{r.term}</dt>
-                <dd className="text-[0.9375rem] leading-relaxed text-ink-2">{r.text}</dd>
+                <dd className="text-ink-2 text-[0.9375rem] leading-relaxed">{r.text}</dd>
               </div>
             ))}
           </dl>
         </div>
       </section>
 
-      <section aria-labelledby="rating-title" className="mt-20 border-t border-rule pt-14">
+      <section aria-labelledby="rating-title" className="border-rule mt-20 border-t pt-14">
         <div className="grid gap-10 lg:grid-cols-[minmax(0,2fr)_minmax(0,5fr)]">
           <div>
             <h2 id="rating-title" className="text-3xl leading-tight font-semibold">
               How the rating is set
             </h2>
-            <p className="mt-3 text-[0.9375rem] leading-relaxed text-ink-2">
-              Findings are grouped into structural defects (cracks, breaks, offsets, sags, deformation) and service
-              defects (roots, deposits, infiltration). Each group takes the grade of its worst finding; the severity
-              rating the buyer sees follows from both, with how densely the defects sit along the line.
+            <p className="text-ink-2 mt-3 text-[0.9375rem] leading-relaxed">
+              Findings are grouped into structural defects (cracks, breaks, offsets, sags, deformation) and service defects (roots,
+              deposits, infiltration). Each group takes the grade of its worst finding; the severity rating the buyer sees follows from
+              both, with how densely the defects sit along the line.
             </p>
-            <p className="mt-3 text-[0.9375rem] leading-relaxed text-ink-2">
-              Grades between locate marks are worked out from the depths and shown as estimates, since locator readings
-              are approximate.
+            <p className="text-ink-2 mt-3 text-[0.9375rem] leading-relaxed">
+              Grades between locate marks are worked out from the depths and shown as estimates, since locator readings are approximate.
             </p>
           </div>
-          <ul className="divide-y divide-rule border-y border-rule">
+          <ul className="divide-rule border-rule divide-y border-y">
             {([1, 2, 3, 4, 5] as const).map((s) => (
               <li key={s} className="flex flex-col gap-2 py-4 sm:flex-row sm:items-center sm:gap-6">
                 <span className="w-36 shrink-0">
                   <SeverityBadge severity={s} />
                 </span>
-                <span className="text-[0.9375rem] text-ink-2">
+                <span className="text-ink-2 text-[0.9375rem]">
                   <span className="sr-only">{SEVERITY_LABELS[s]}: </span>
                   {meaning[s]}
                 </span>
@@ -134,23 +134,23 @@ export default function HowItWorksPage() {
         </div>
       </section>
 
-      <section aria-labelledby="repairs-title" className="mt-20 border-t border-rule pt-14">
+      <section aria-labelledby="repairs-title" className="border-rule mt-20 border-t pt-14">
         <div className="grid gap-10 lg:grid-cols-[minmax(0,2fr)_minmax(0,5fr)]">
           <div>
             <h2 id="repairs-title" className="text-3xl leading-tight font-semibold">
               Repair options
             </h2>
-            <p className="mt-3 text-[0.9375rem] leading-relaxed text-ink-2">
-              For each stretch of line that needs work, the summary lists the methods that fit and those ruled out, each
-              with its reason, and a cost range from the market&rsquo;s rate table, adjusted for depth and surface and
-              split between the private line and the public portion.
+            <p className="text-ink-2 mt-3 text-[0.9375rem] leading-relaxed">
+              For each stretch of line that needs work, the summary lists the methods that fit and those ruled out, each with its reason,
+              and a cost range from the market&rsquo;s rate table, adjusted for depth and surface and split between the private line and the
+              public portion.
             </p>
           </div>
-          <dl className="divide-y divide-rule border-y border-rule">
+          <dl className="divide-rule border-rule divide-y border-y">
             {repairs.map((r) => (
               <div key={r.name} className="grid gap-1 py-4 sm:grid-cols-[12rem_1fr] sm:gap-6">
                 <dt className="font-serif text-lg font-semibold">{r.name}</dt>
-                <dd className="text-[0.9375rem] leading-relaxed text-ink-2">{r.when}</dd>
+                <dd className="text-ink-2 text-[0.9375rem] leading-relaxed">{r.when}</dd>
               </div>
             ))}
           </dl>

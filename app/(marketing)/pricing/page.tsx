@@ -46,14 +46,13 @@ export default function PricingPage() {
   return (
     <div className="mx-auto max-w-6xl px-4 pt-14 sm:px-6 sm:pt-20">
       <header className="max-w-3xl">
-        <p className="text-xs font-semibold tracking-[0.14em] text-copper uppercase">Pricing</p>
+        <p className="text-copper text-xs font-semibold tracking-[0.14em] uppercase">Pricing</p>
         <h1 className="mt-3 text-4xl leading-tight font-semibold tracking-[-0.01em] sm:text-5xl">
           One price per scope, paid once by the buyer
         </h1>
-        <p className="mt-5 text-lg leading-relaxed text-ink-2">
-          These are the prices in Gradeline&rsquo;s demo market, Harrow Falls. Admins set the prices for each market, so
-          the figures where you work may differ. The buyer pays when they unlock the rated summary; ordering the scope
-          costs the agent nothing.
+        <p className="text-ink-2 mt-5 text-lg leading-relaxed">
+          These are the prices in Gradeline&rsquo;s demo market, Harrow Falls. Admins set the prices for each market, so the figures where
+          you work may differ. The buyer pays when they unlock the rated summary; ordering the scope costs the agent nothing.
         </p>
       </header>
 
@@ -62,7 +61,7 @@ export default function PricingPage() {
           <h2 id="prices-title" className="text-2xl font-semibold">
             The scope and its add-ons
           </h2>
-          <table className="mt-5 w-full border-t-2 border-ink text-left">
+          <table className="border-ink mt-5 w-full border-t-2 text-left">
             <caption className="sr-only">Prices in the demo market, US dollars</caption>
             <thead className="sr-only">
               <tr>
@@ -70,14 +69,14 @@ export default function PricingPage() {
                 <th scope="col">Price</th>
               </tr>
             </thead>
-            <tbody className="divide-y divide-rule border-b border-rule">
+            <tbody className="divide-rule border-rule divide-y border-b">
               {lines.map((l) => (
                 <tr key={l.name}>
                   <th scope="row" className="py-5 pr-6 align-top font-normal">
-                    <span className="block font-serif text-lg font-semibold text-ink">{l.name}</span>
-                    <span className="mt-1 block max-w-[52ch] text-[0.9375rem] leading-relaxed text-ink-2">{l.detail}</span>
+                    <span className="text-ink block font-serif text-lg font-semibold">{l.name}</span>
+                    <span className="text-ink-2 mt-1 block max-w-[52ch] text-[0.9375rem] leading-relaxed">{l.detail}</span>
                   </th>
-                  <td className="py-5 text-right align-top text-xl text-ink">
+                  <td className="text-ink py-5 text-right align-top text-xl">
                     {l.add ? (
                       <span className="num">
                         <span aria-hidden="true">+</span>
@@ -86,7 +85,7 @@ export default function PricingPage() {
                       </span>
                     ) : (
                       <>
-                        <span className="block text-xs text-ink-2">from</span>
+                        <span className="text-ink-2 block text-xs">from</span>
                         <Money cents={l.cents} whole className="text-2xl" />
                       </>
                     )}
@@ -95,10 +94,10 @@ export default function PricingPage() {
               ))}
               <tr>
                 <th scope="row" className="py-5 pr-6 align-top font-normal">
-                  <span className="block font-serif text-lg font-semibold text-ink">Report reuse</span>
-                  <span className="mt-1 block max-w-[52ch] text-[0.9375rem] leading-relaxed text-ink-2">
-                    When a deal falls through, a later buyer of the same listing unlocks the existing report while it is
-                    fresh, instead of booking a new scope.
+                  <span className="text-ink block font-serif text-lg font-semibold">Report reuse</span>
+                  <span className="text-ink-2 mt-1 block max-w-[52ch] text-[0.9375rem] leading-relaxed">
+                    When a deal falls through, a later buyer of the same listing unlocks the existing report while it is fresh, instead of
+                    booking a new scope.
                   </span>
                 </th>
                 <td className="py-5 text-right align-top">
@@ -108,50 +107,49 @@ export default function PricingPage() {
             </tbody>
           </table>
 
-          <div className="mt-8 rounded-card border border-rule bg-white px-5 py-4">
-            <h3 className="font-sans text-sm font-semibold text-ink">Example</h3>
-            <p className="mt-1 text-[0.9375rem] text-ink-2">A scope with no known cleanout, booked as a rush:</p>
-            <p className="num mt-2 text-lg text-ink">
+          <div className="rounded-card border-rule mt-8 border bg-white px-5 py-4">
+            <h3 className="text-ink font-sans text-sm font-semibold">Example</h3>
+            <p className="text-ink-2 mt-1 text-[0.9375rem]">A scope with no known cleanout, booked as a rush:</p>
+            <p className="num text-ink mt-2 text-lg">
               {formatMoney(P.baseCents, { whole: true })} + {formatMoney(P.noCleanoutCents, { whole: true })} +{" "}
-              {formatMoney(P.rushCents, { whole: true })} = <strong className="font-semibold">{formatMoney(example, { whole: true })}</strong>
+              {formatMoney(P.rushCents, { whole: true })} ={" "}
+              <strong className="font-semibold">{formatMoney(example, { whole: true })}</strong>
             </p>
           </div>
         </section>
 
-        <section aria-labelledby="inspectors-title" className="rounded-card border border-rule bg-paper-2/60 px-5 py-6 sm:px-6">
+        <section aria-labelledby="inspectors-title" className="rounded-card border-rule bg-paper-2/60 border px-5 py-6 sm:px-6">
           <h2 id="inspectors-title" className="text-2xl font-semibold">
             For inspectors
           </h2>
-          <p className="mt-3 text-[0.9375rem] leading-relaxed text-ink-2">
-            Gradeline keeps a platform fee on each unlocked order and sends the rest
-            to your connected payout account once the buyer has paid.
+          <p className="text-ink-2 mt-3 text-[0.9375rem] leading-relaxed">
+            Gradeline keeps a platform fee on each unlocked order and sends the rest to your connected payout account once the buyer has
+            paid.
           </p>
-          <dl className="mt-6 divide-y divide-rule border-y border-rule">
+          <dl className="divide-rule border-rule mt-6 divide-y border-y">
             <div className="flex items-baseline justify-between gap-4 py-3">
-              <dt className="text-[0.9375rem] text-ink">Platform fee</dt>
-              <dd className="num text-lg text-ink">{P.platformFeeBps / 100} %</dd>
+              <dt className="text-ink text-[0.9375rem]">Platform fee</dt>
+              <dd className="num text-ink text-lg">{P.platformFeeBps / 100}%</dd>
             </div>
             <div className="flex items-baseline justify-between gap-4 py-3">
-              <dt className="text-[0.9375rem] text-ink">
+              <dt className="text-ink text-[0.9375rem]">
                 You receive on a <span className="num">{formatMoney(P.baseCents, { whole: true })}</span> scope
               </dt>
-              <dd className="text-lg text-ink">
+              <dd className="text-ink text-lg">
                 <Money cents={inspectorGets(P.baseCents)} whole />
               </dd>
             </div>
             <div className="flex items-baseline justify-between gap-4 py-3">
-              <dt className="text-[0.9375rem] text-ink">
+              <dt className="text-ink text-[0.9375rem]">
                 On the <span className="num">{formatMoney(example, { whole: true })}</span> example
               </dt>
-              <dd className="text-lg text-ink">
+              <dd className="text-ink text-lg">
                 <Money cents={inspectorGets(example)} whole />
               </dd>
             </div>
             <div className="flex items-baseline justify-between gap-4 py-3">
-              <dt className="text-[0.9375rem] text-ink">
-                Your share of each reuse ({P.reuseInspectorShareBps / 100} %)
-              </dt>
-              <dd className="text-lg text-ink">
+              <dt className="text-ink text-[0.9375rem]">Your share of each reuse ({P.reuseInspectorShareBps / 100}%)</dt>
+              <dd className="text-ink text-lg">
                 <Money cents={share(P.reuseCents, P.reuseInspectorShareBps)} />
               </dd>
             </div>
@@ -162,18 +160,16 @@ export default function PricingPage() {
         </section>
       </div>
 
-      <section aria-labelledby="notes-title" className="mt-16 border-t border-rule pt-10">
+      <section aria-labelledby="notes-title" className="border-rule mt-16 border-t pt-10">
         <h2 id="notes-title" className="text-xl font-semibold">
           Good to know
         </h2>
-        <ul className="mt-4 grid gap-x-10 gap-y-3 text-[0.9375rem] leading-relaxed text-ink-2 md:grid-cols-2">
+        <ul className="text-ink-2 mt-4 grid gap-x-10 gap-y-3 text-[0.9375rem] leading-relaxed md:grid-cols-2">
           <li>Prices are in US dollars and include the rated summary, the clips, the PDF and a read-only share link.</li>
           <li>The buyer pays once. Payment is confirmed by the payment provider before anything unlocks.</li>
           <li>An agent can cancel an order at no charge before the visit.</li>
           <li>Refunds after payment are handled by a Gradeline admin.</li>
-          <li>
-            Repair cost ranges in a report come from the market&rsquo;s rate table: estimates for negotiation, not quotes.
-          </li>
+          <li>Repair cost ranges in a report come from the market&rsquo;s rate table: estimates for negotiation, not quotes.</li>
           <li>All prices, places and examples on this site belong to the invented demo market.</li>
         </ul>
       </section>
