@@ -48,7 +48,12 @@ export async function ensureBucket(): Promise<void> {
   try {
     await client.send(new HeadBucketCommand({ Bucket: bucket() }));
   } catch {
-    await client.send(new CreateBucketCommand({ Bucket: bucket() }));
+    try {
+      await client.send(new CreateBucketCommand({ Bucket: bucket() }));
+    } catch (error) {
+      // Another process made it in the meantime.
+      if (!/BucketAlready/.test((error as Error).name)) throw error;
+    }
   }
   await client.send(
     new PutBucketCorsCommand({

@@ -1,5 +1,5 @@
 // Runs in each test file's worker: a fresh in-memory database and a fixed local environment.
-import { afterAll } from "vitest";
+import { afterAll, beforeAll } from "vitest";
 
 process.env.DATABASE_URL = "memory://";
 process.env.NEXTAUTH_SECRET ??= "test-secret-test-secret-test-secret-0123456789";
@@ -14,6 +14,11 @@ process.env.AUTH_LIMIT_PER_ADDRESS ??= "1000";
 const g = globalThis as unknown as { __gradelineDb?: unknown; __gradelineEnv?: unknown };
 g.__gradelineDb = undefined;
 g.__gradelineEnv = undefined;
+
+beforeAll(async () => {
+  const { ensureBucket } = await import("@/lib/storage/client");
+  await ensureBucket();
+});
 
 afterAll(async () => {
   const { closeDb } = await import("@/db/client");
