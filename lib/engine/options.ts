@@ -14,7 +14,8 @@ export interface ResolvedOptions {
   slopeRules: SlopeRuleSet;
 }
 
-// A table checked once need not be checked on every evaluation; callers pass the same object.
+// A table checked once need not be checked on every evaluation. An edited table must be a new
+// object (as one read afresh from the database is), or the edit goes unchecked.
 const checked = new WeakSet<object>([DEMO_RATE_TABLE, ...Object.values(SLOPE_RULE_SETS)]);
 
 function check<T extends object>(

@@ -1,5 +1,6 @@
 import { z } from "zod";
 
+import { deepFreeze } from "./freeze";
 import { SURFACES, type Surface } from "./vocabulary";
 
 export const REPAIR_METHODS = ["no_action", "clean_and_recheck", "spot_repair", "lining", "pipe_bursting", "excavate_replace"] as const;
@@ -83,7 +84,7 @@ const range = (low: number, high: number): MoneyRange => ({ lowCents: low * 100,
  * $4,000-$15,000, trenchless $3,000-$11,000, an inspection $300-$800. Real rates are an admin
  * setting with their own date and source.
  */
-export const DEMO_RATE_TABLE: RateTable = {
+export const DEMO_RATE_TABLE: RateTable = deepFreeze({
   name: "Demo rates (invented)",
   currency: "USD",
   effectiveDate: "2026-01-15",
@@ -114,7 +115,7 @@ export const DEMO_RATE_TABLE: RateTable = {
   // practice: 4 ft is a middle guess between mild-climate (1.5-2.5 ft) and cold-climate (4-8 ft) cover.
   assumedDepthFt: 4,
   assumedSurface: "soil",
-};
+});
 
 export function depthBand(rates: RateTable, depthFt: number): DepthBand {
   let band = rates.depthBands[0];

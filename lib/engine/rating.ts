@@ -82,6 +82,7 @@ export function rate(record: InspectionRecord): Rating {
   let severity = Math.max(peak, lifted);
   const reasons: string[] = [];
   const named = new Set<Finding>();
+  let unseen = false;
   if (STOPPED_IN_LINE.includes(surveyEnd.reason)) {
     const stopper = findings.find((f) => f.grade >= 3 && (f.to ?? f.at) >= surveyEnd.at - STOP_NEAR_FT);
     if (stopper) {
@@ -91,6 +92,7 @@ export function rate(record: InspectionRecord): Rating {
     } else {
       // practice: an unseen remainder is never rated better than Moderate.
       severity = Math.max(severity, 3);
+      unseen = true;
     }
   }
   const collapse = findings.find((f) => f.type === "collapse");
@@ -102,7 +104,7 @@ export function rate(record: InspectionRecord): Rating {
   if (worst && !named.has(worst)) reasons.push(`the worst finding is the ${describe(worst)}`);
   if (!worst) reasons.push("no defects were recorded");
   if (lifted > peak) reasons.push(`there are many defects for the length of line (${Math.round(agg.mean)} points per 100 ft)`);
-  if (STOPPED_IN_LINE.includes(surveyEnd.reason) && reasons.length > 0 && named.size === 0) {
+  if (unseen) {
     reasons.push(`${SURVEY_END_LABELS[surveyEnd.reason]} at ${ft(surveyEnd.at)}: the rest of the line was not seen`);
   }
   const s = clampSeverity(severity);

@@ -60,7 +60,7 @@ describe("Gradeline severity method v1 (own method, lib/engine/README.md)", () =
     expect(r.density.perHundredFt).toBeCloseTo(30, 10);
     expect(r.density.grade).toBe(3);
     expect(r.severity).toBe(3);
-    expect(r.reasons.some((x) => x.includes("close together"))).toBe(true);
+    expect(r.reasons.some((x) => x.includes("many defects for the length of line"))).toBe(true);
     // two of them are not dense: 6 points, 10 per 100 ft, density grade 2
     expect(rated(withFindings(roots.slice(0, 2))).severity).toBe(2);
   });

@@ -51,6 +51,18 @@ describe("stretches that need work", () => {
     expect(e.stretches.map((s) => [s.from, s.to, s.side])).toEqual([[42, 45, "private"]]);
   });
 
+  it("practice: a stretch takes the surface of the nearest marks on its own side of the boundary", () => {
+    const locates = [
+      { at: 30, depthFt: 3, groundElevationFt: null, surface: "soil" as const },
+      { at: 46, depthFt: 4, groundElevationFt: null, surface: "street" as const },
+    ];
+    const e = evaluate(withFindings([fracture(43), fracture(50)], { locates }));
+    expect(e.stretches.map((s) => [s.side, s.surface])).toEqual([
+      ["private", "soil"],
+      ["public", "street"],
+    ]);
+  });
+
   it("every stretch offers every method once, in order; fitting ones priced in whole cents, low <= high; others unpriced", () => {
     const e = evaluate(driveway, { rates: FLAT_RATES });
     for (const s of e.stretches) {
