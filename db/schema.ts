@@ -1,7 +1,9 @@
 import { sql } from "drizzle-orm";
 import {
+  bigint,
   boolean,
   date,
+  doublePrecision,
   index,
   integer,
   jsonb,
@@ -25,6 +27,7 @@ export const orderStatusEnum = pgEnum("order_status", [
   "refunded",
 ]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
+export const clipStatusEnum = pgEnum("clip_status", ["uploading", "ready", "rejected", "aborted"]);
 export const proposalStatusEnum = pgEnum("proposal_status", ["proposed", "confirmed", "declined", "withdrawn"]);
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -190,6 +193,69 @@ export const appointmentProposals = pgTable(
   (t) => [index("appointment_proposals_order_idx").on(t.orderId)],
 );
 
+/** A video clip of a job, uploaded by the browser straight to storage in presigned parts. */
+export const clips = pgTable(
+  "clips",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    inspectorId: uuid("inspector_id")
+      .notNull()
+      .references(() => users.id),
+    status: clipStatusEnum("status").notNull().default("uploading"),
+    label: text("label").notNull(),
+    sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    declaredType: text("declared_type").notNull(),
+    detectedType: text("detected_type"),
+    objectKey: text("object_key").notNull().unique(),
+    uploadId: text("upload_id"),
+    partSizeBytes: integer("part_size_bytes").notNull(),
+    partCount: integer("part_count").notNull(),
+    durationSeconds: doublePrecision("duration_seconds"),
+    startFootage: doublePrecision("start_footage"),
+    posterKey: text("poster_key"),
+    rejectedReason: text("rejected_reason"),
+    createdAt: createdAt(),
+    completedAt: timestamp("completed_at", { withTimezone: true }),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("clips_order_idx").on(t.orderId), index("clips_status_idx").on(t.status, t.updatedAt)],
+);
+
+/** A still frame taken from a clip (for a finding). */
+export const stills = pgTable(
+  "stills",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    clipId: uuid("clip_id").references(() => clips.id, { onDelete: "set null" }),
+    second: doublePrecision("second"),
+    objectKey: text("object_key").notNull().unique(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("stills_order_idx").on(t.orderId)],
+);
+
+/** The inspector's record of a job: the draft the engine evaluates, and what was submitted. */
+export const inspections = pgTable("inspections", {
+  orderId: uuid("order_id")
+    .primaryKey()
+    .references(() => orders.id, { onDelete: "cascade" }),
+  record: jsonb("record").$type<Record<string, unknown>>().notNull().default(sql`'{}'::jsonb`),
+  narrative: text("narrative").notNull().default(""),
+  recommendation: text("recommendation").notNull().default(""),
+  revision: integer("revision").notNull().default(0),
+  evaluation: jsonb("evaluation").$type<Record<string, unknown>>(),
+  engineVersion: text("engine_version"),
+  ratesId: text("rates_id"),
+  submittedAt: timestamp("submitted_at", { withTimezone: true }),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
 /** Prices of a market, versioned: each change is a new row; orders keep the lines they were priced with. */
 export const priceSettings = pgTable(
   "price_settings",
@@ -252,3 +318,5 @@ export type Order = typeof orders.$inferSelect;
 export type Listing = typeof listings.$inferSelect;
 export type AppointmentProposal = typeof appointmentProposals.$inferSelect;
 export type PriceSettings = typeof priceSettings.$inferSelect;
+export type Clip = typeof clips.$inferSelect;
+export type Inspection = typeof inspections.$inferSelect;
