@@ -276,6 +276,20 @@ export const priceSettings = pgTable(
   (t) => [index("price_settings_market_idx").on(t.market, t.effectiveAt)],
 );
 
+/** The repair-cost rate table the engine uses, versioned; each report keeps the id it was computed with. */
+export const rateTables = pgTable(
+  "rate_tables",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    market: text("market").notNull(),
+    table: jsonb("table").$type<Record<string, unknown>>().notNull(),
+    sourceNote: text("source_note"),
+    createdBy: uuid("created_by").references(() => users.id),
+    effectiveAt: timestamp("effective_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("rate_tables_market_idx").on(t.market, t.effectiveAt)],
+);
+
 export const mailOutbox = pgTable(
   "mail_outbox",
   {

@@ -13,12 +13,13 @@ afterAll(async () => {
 
 describe("signing in and out in Chromium", () => {
   it("the landing, sign-in and sign-up pages have no axe violations", async () => {
-    const page = await browser.newPage();
+    const context = await browser.newContext();
+    const page = await context.newPage();
     for (const path of ["/", "/pricing", "/sign-in", "/sign-up"]) {
       await page.goto(appUrl(path));
       expect(await axeViolations(page), path).toEqual([]);
     }
-    await page.close();
+    await context.close();
   });
 
   it.each([
@@ -41,14 +42,15 @@ describe("signing in and out in Chromium", () => {
   });
 
   it("a wrong password shows a plain message and stays on sign-in", async () => {
-    const page = await browser.newPage();
+    const context = await browser.newContext();
+    const page = await context.newPage();
     await page.goto(appUrl("/sign-in"));
     await page.getByLabel("E-mail").fill("buyer3@gradeline.test");
     await page.getByLabel("Password").fill("not-the-password");
     await page.getByRole("button", { name: "Sign in" }).click();
     await expect.poll(() => page.getByRole("alert").first().textContent()).toContain("do not match");
     expect(new URL(page.url()).pathname).toBe("/sign-in");
-    await page.close();
+    await context.close();
   });
 
   it("a new agent signs up, lands on the orders page, and the wrong role's pages answer 404", async () => {
