@@ -28,6 +28,9 @@ export const orderStatusEnum = pgEnum("order_status", [
 ]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
 export const clipStatusEnum = pgEnum("clip_status", ["uploading", "ready", "rejected", "aborted"]);
+export const paymentStatusEnum = pgEnum("payment_status", ["pending", "paid", "expired", "refunded", "partially_refunded"]);
+export const payoutStatusEnum = pgEnum("payout_status", ["waiting", "sent", "reversed", "partially_reversed"]);
+export const ledgerKindEnum = pgEnum("ledger_kind", ["charge", "fee", "transfer", "refund", "reversal"]);
 export const proposalStatusEnum = pgEnum("proposal_status", ["proposed", "confirmed", "declined", "withdrawn"]);
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -290,6 +293,112 @@ export const rateTables = pgTable(
   (t) => [index("rate_tables_market_idx").on(t.market, t.effectiveAt)],
 );
 
+/** One Checkout Session per row; a report is unlocked only by the provider's signed webhook. */
+export const payments = pgTable(
+  "payments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    buyerId: uuid("buyer_id")
+      .notNull()
+      .references(() => users.id),
+    kind: text("kind").notNull().default("scope"),
+    checkoutSessionId: text("checkout_session_id").unique(),
+    paymentIntentId: text("payment_intent_id"),
+    chargeId: text("charge_id"),
+    amountCents: integer("amount_cents").notNull(),
+    currency: text("currency").notNull().default("usd"),
+    status: paymentStatusEnum("status").notNull().default("pending"),
+    refundedCents: integer("refunded_cents").notNull().default(0),
+    createdAt: createdAt(),
+    paidAt: timestamp("paid_at", { withTimezone: true }),
+  },
+  (t) => [index("payments_order_idx").on(t.orderId), index("payments_buyer_idx").on(t.buyerId)],
+);
+
+/** Every provider event, recorded once by its id in the same transaction as its effect. */
+export const webhookEvents = pgTable("webhook_events", {
+  id: text("id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
+  outcome: text("outcome").notNull(),
+});
+
+/** Who may read which report's rated summary. */
+export const reportAccess = pgTable(
+  "report_access",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id),
+    paymentId: uuid("payment_id").references(() => payments.id),
+    grantedAt: timestamp("granted_at", { withTimezone: true }).notNull().defaultNow(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [uniqueIndex("report_access_order_user_idx").on(t.orderId, t.userId)],
+);
+
+export const shareLinks = pgTable(
+  "share_links",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id),
+    tokenHash: text("token_hash").notNull().unique(),
+    label: text("label"),
+    createdAt: createdAt(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [index("share_links_order_idx").on(t.orderId)],
+);
+
+/** The inspector's share of a payment, sent once with an idempotency key tied to the payment. */
+export const payouts = pgTable("payouts", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  paymentId: uuid("payment_id")
+    .notNull()
+    .unique()
+    .references(() => payments.id),
+  inspectorId: uuid("inspector_id")
+    .notNull()
+    .references(() => users.id),
+  amountCents: integer("amount_cents").notNull(),
+  reversedCents: integer("reversed_cents").notNull().default(0),
+  status: payoutStatusEnum("status").notNull().default("waiting"),
+  transferId: text("transfer_id"),
+  createdAt: createdAt(),
+  sentAt: timestamp("sent_at", { withTimezone: true }),
+});
+
+/** Every money movement in integer cents. For each payment: charge = transfers + fees + refunds. */
+export const ledgerEntries = pgTable(
+  "ledger_entries",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    paymentId: uuid("payment_id").references(() => payments.id),
+    kind: ledgerKindEnum("kind").notNull(),
+    amountCents: integer("amount_cents").notNull(),
+    externalId: text("external_id"),
+    note: text("note"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("ledger_order_idx").on(t.orderId), uniqueIndex("ledger_external_idx").on(t.kind, t.externalId)],
+);
+
 export const mailOutbox = pgTable(
   "mail_outbox",
   {
@@ -334,3 +443,4 @@ export type AppointmentProposal = typeof appointmentProposals.$inferSelect;
 export type PriceSettings = typeof priceSettings.$inferSelect;
 export type Clip = typeof clips.$inferSelect;
 export type Inspection = typeof inspections.$inferSelect;
+export type Payment = typeof payments.$inferSelect;
