@@ -6,6 +6,7 @@ import { hashPassword } from "@/lib/auth/password";
 import { DEMO_TOWN, DEMO_USERS, demoOrders } from "@/lib/demo-world";
 
 import { getDb } from "./client";
+import { seedDemoReports } from "./seed-reports";
 import { DEFAULT_PRICES } from "@/lib/pricing-defaults";
 
 import { DEFAULT_MARKET } from "./queries/prices";
@@ -27,7 +28,10 @@ const PATHS: Record<OrderStatus, OrderStatus[]> = {
 export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean }> {
   const db = await getDb();
   const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, "admin@gradeline.test")).limit(1);
-  if (existing) return { seeded: false };
+  if (existing) {
+    await seedDemoReports();
+    return { seeded: false };
+  }
   const passwordHash = await hashPassword(DEMO_PASSWORD);
 
   await db.transaction(async (tx) => {
@@ -113,5 +117,6 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
       }
     }
   });
+  await seedDemoReports();
   return { seeded: true };
 }

@@ -54,10 +54,8 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   }
 
   await getDb();
-  if (!process.env.DATABASE_URL || opts.seed) {
-    if (opts.seed) await seedDemoWorld();
-  }
   await ensureBucket();
+  if (opts.seed) await seedDemoWorld();
   const stopOutbox = startOutboxWorker();
   const stopAtRisk = startAtRiskSweeper();
 

@@ -1,8 +1,8 @@
-import { count } from "drizzle-orm";
+import { count, eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 
 import { getDb } from "@/db/client";
-import { orders, users } from "@/db/schema";
+import { clips, inspections, orders, reportAccess, users } from "@/db/schema";
 import { seedDemoWorld } from "@/db/seed";
 
 describe("the demo world", () => {
@@ -24,5 +24,21 @@ describe("the demo world", () => {
     expect([...states].sort()).toEqual(["accepted", "cancelled", "delivered", "open", "refunded", "scheduled", "unlocked"]);
     const emails = (await db.select({ e: users.email }).from(users)).map((r) => r.e);
     for (const e of ["agent@gradeline.test", "inspector@gradeline.test", "inspector2@gradeline.test", "buyer@gradeline.test", "admin@gradeline.test"]) expect(emails).toContain(e);
+  });
+});
+
+describe("the demo reports", () => {
+  it("every delivered, unlocked or refunded order has clips and a submitted record with its evaluation; the unlocked one has its buyer's access", async () => {
+    await seedDemoWorld();
+    const db = await getDb();
+    const delivered = await db.select().from(orders).where(inArray(orders.status, ["delivered", "unlocked", "refunded"]));
+    expect(delivered.length).toBeGreaterThanOrEqual(3);
+    for (const o of delivered) {
+      const [inspection] = await db.select().from(inspections).where(eq(inspections.orderId, o.id));
+      expect(inspection.evaluation).toHaveProperty("severity");
+      expect((await db.select().from(clips).where(eq(clips.orderId, o.id))).length).toBeGreaterThan(0);
+    }
+    const unlocked = delivered.find((o) => o.status === "unlocked")!;
+    expect(await db.select().from(reportAccess).where(eq(reportAccess.orderId, unlocked.id))).toHaveLength(1);
   });
 });
