@@ -9,6 +9,7 @@ import { seedDemoWorld } from "@/db/seed";
 import { env, EnvError } from "@/lib/env";
 import { startOutboxWorker } from "@/lib/mail/outbox-worker";
 import { startAtRiskSweeper } from "@/lib/orders/at-risk-sweep";
+import { startPayoutWorker } from "@/lib/payments/payouts";
 import { ensureBucket } from "@/lib/storage/client";
 import { startMailCatcher } from "@/services/mail-catcher";
 import { startPaymentsStandin } from "@/services/payments-standin";
@@ -58,6 +59,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   if (opts.seed) await seedDemoWorld();
   const stopOutbox = startOutboxWorker();
   const stopAtRisk = startAtRiskSweeper();
+  const stopPayouts = startPayoutWorker();
 
   const app = next({ dev: opts.dev, hostname: e.HOST, port: e.PORT, dir: process.cwd() });
   const handle = app.getRequestHandler();
@@ -78,6 +80,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
     console.log(`\n${signal}: finishing requests in flight, then closing the database.`);
     stopOutbox();
     stopAtRisk();
+    stopPayouts();
     const force = setTimeout(() => server.closeAllConnections(), 10_000);
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
