@@ -7,12 +7,26 @@ export function navFor(role: Role, opts: { mailbox: boolean }): NavItem[] {
   const mailbox = opts.mailbox ? [{ href: "/dev/mailbox", label: "Mailbox" }] : [];
   switch (role) {
     case "agent":
-      return [{ href: "/orders", label: "Orders" }, ...mailbox];
+      return [{ href: "/orders", label: "Orders" }, { href: "/orders/new", label: "New order" }, ...mailbox];
     case "inspector":
-      return [{ href: "/jobs", label: "Job board" }, { href: "/jobs/mine", label: "My jobs" }, ...mailbox];
+      return [
+        { href: "/jobs", label: "Job board" },
+        { href: "/jobs/mine", label: "My jobs" },
+        { href: "/earnings", label: "Earnings" },
+        { href: "/profile", label: "Profile" },
+        ...mailbox,
+      ];
     case "buyer":
       return [{ href: "/reports", label: "My reports" }, ...mailbox];
     case "admin":
-      return [{ href: "/admin", label: "Overview" }, ...mailbox];
+      return [
+        { href: "/admin", label: "Overview" },
+        { href: "/admin/inspectors", label: "Inspectors" },
+        { href: "/admin/payments", label: "Payments" },
+        { href: "/admin/prices", label: "Prices and rates" },
+        { href: "/admin/users", label: "Users" },
+        { href: "/admin/audit", label: "Audit log" },
+        ...mailbox,
+      ];
   }
 }
