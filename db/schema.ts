@@ -28,6 +28,7 @@ export const orderStatusEnum = pgEnum("order_status", [
 ]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
 export const clipStatusEnum = pgEnum("clip_status", ["uploading", "ready", "rejected", "aborted"]);
+export const disputeStatusEnum = pgEnum("dispute_status", ["open", "closed"]);
 export const paymentStatusEnum = pgEnum("payment_status", ["pending", "paid", "expired", "refunded", "partially_refunded"]);
 export const payoutStatusEnum = pgEnum("payout_status", ["waiting", "sent", "reversed", "partially_reversed"]);
 export const ledgerKindEnum = pgEnum("ledger_kind", ["charge", "fee", "transfer", "refund", "reversal"]);
@@ -144,6 +145,8 @@ export const orders = pgTable(
     platformFeeCents: integer("platform_fee_cents").notNull(),
     priceLines: jsonb("price_lines").$type<{ label: string; cents: number }[]>().notNull(),
     atRiskNotifiedAt: timestamp("at_risk_notified_at", { withTimezone: true }),
+    /** Report reuse: this order sells the report of an earlier order of the same listing. */
+    reuseOfOrderId: uuid("reuse_of_order_id"),
     appointmentStart: timestamp("appointment_start", { withTimezone: true }),
     appointmentEnd: timestamp("appointment_end", { withTimezone: true }),
     acceptedAt: timestamp("accepted_at", { withTimezone: true }),
@@ -272,6 +275,7 @@ export const priceSettings = pgTable(
     reuseCents: integer("reuse_cents").notNull(),
     platformFeeBps: integer("platform_fee_bps").notNull(),
     reuseInspectorShareBps: integer("reuse_inspector_share_bps").notNull(),
+    reuseFreshDays: integer("reuse_fresh_days").notNull().default(180),
     sourceNote: text("source_note"),
     createdBy: uuid("created_by").references(() => users.id),
     effectiveAt: timestamp("effective_at", { withTimezone: true }).notNull().defaultNow(),
@@ -397,6 +401,45 @@ export const ledgerEntries = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("ledger_order_idx").on(t.orderId), uniqueIndex("ledger_external_idx").on(t.kind, t.externalId)],
+);
+
+export const disputes = pgTable(
+  "disputes",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    openedBy: uuid("opened_by")
+      .notNull()
+      .references(() => users.id),
+    reason: text("reason").notNull(),
+    message: text("message").notNull(),
+    status: disputeStatusEnum("status").notNull().default("open"),
+    outcome: text("outcome"),
+    outcomeNote: text("outcome_note"),
+    createdAt: createdAt(),
+    closedAt: timestamp("closed_at", { withTimezone: true }),
+    closedBy: uuid("closed_by").references(() => users.id),
+  },
+  (t) => [index("disputes_status_idx").on(t.status, t.createdAt), index("disputes_order_idx").on(t.orderId)],
+);
+
+export const disputeMessages = pgTable(
+  "dispute_messages",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    disputeId: uuid("dispute_id")
+      .notNull()
+      .references(() => disputes.id, { onDelete: "cascade" }),
+    authorId: uuid("author_id")
+      .notNull()
+      .references(() => users.id),
+    toAddress: text("to_address").notNull(),
+    body: text("body").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("dispute_messages_dispute_idx").on(t.disputeId, t.createdAt)],
 );
 
 export const mailOutbox = pgTable(

@@ -9,6 +9,7 @@ import { getDb } from "./client";
 import { seedDemoReports } from "./seed-reports";
 import { DEFAULT_PRICES } from "@/lib/pricing-defaults";
 
+import { listingAddressKey } from "./queries/order-commands";
 import { DEFAULT_MARKET } from "./queries/prices";
 import { inspectorProfiles, listings, orderEvents, orders, type OrderStatus, priceSettings, serviceAreas, users } from "./schema";
 
@@ -65,7 +66,7 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
           city: DEMO_TOWN.city,
           state: DEMO_TOWN.state,
           postalCode: o.postalCode,
-          addressKey: `${o.street}|${o.postalCode}`.toLowerCase(),
+          addressKey: listingAddressKey({ street: o.street, postalCode: o.postalCode }),
           propertyType: o.propertyType,
           yearBuilt: o.yearBuilt,
         })

@@ -12,3 +12,6 @@ export const DEFAULT_PRICES = {
 } as const;
 
 export type Prices = { [K in keyof typeof DEFAULT_PRICES]: number };
+
+/** A report can be sold again to a later buyer of the same listing for this long after the visit (admin setting). */
+export const DEFAULT_REUSE_FRESH_DAYS = 180;

@@ -50,7 +50,7 @@ async function loadDto(tx: Tx, orderId: string): Promise<OrderDto> {
   return toOrderDto(row);
 }
 
-const addressKey = (a: CreateOrderInput["address"]) =>
+export const listingAddressKey = (a: { street: string; unit?: string | null; postalCode: string }) =>
   [a.street, a.unit ?? "", a.postalCode].map((p) => p.toLowerCase().replace(/[^a-z0-9]+/g, " ").trim()).join("|");
 
 export async function createOrder(agent: Actor, input: CreateOrderInput): Promise<OrderDto> {
@@ -63,7 +63,7 @@ export async function createOrder(agent: Actor, input: CreateOrderInput): Promis
   return db.transaction(async (tx) => {
     const prices = await currentPrices(undefined, tx);
     const quote = quoteScope(prices, { cleanoutKnown: input.cleanoutKnown, buildingSewers: input.buildingSewers, deadline: new Date(input.deadline) });
-    const key = addressKey(input.address);
+    const key = listingAddressKey(input.address);
     await tx
       .insert(listings)
       .values({ ...input.address, unit: input.address.unit || null, addressKey: key, propertyType: input.propertyType, yearBuilt: input.yearBuilt ?? null })

@@ -31,6 +31,9 @@ async function loadReportOrder(orderId: string) {
 
 type ReportOrder = NonNullable<Awaited<ReturnType<typeof loadReportOrder>>>;
 
+/** A reuse order reads the record, clips and stills of the report it resells. */
+const sourceOf = (r: ReportOrder) => r.order.reuseOfOrderId ?? r.order.id;
+
 async function hasAccess(orderId: string, userId: string) {
   const db = await getDb();
   const [row] = await db
@@ -68,8 +71,8 @@ export async function reportAccessFor(r: ReportOrder, viewer: Viewer): Promise<"
 async function preview(r: ReportOrder, viewerId: string | null): Promise<ReportPreview> {
   const db = await getDb();
   const [[clipCount], [inspection], [payment]] = await Promise.all([
-    db.select({ n: count() }).from(clips).where(and(eq(clips.orderId, r.order.id), eq(clips.status, "ready"))),
-    db.select({ evaluation: inspections.evaluation }).from(inspections).where(eq(inspections.orderId, r.order.id)).limit(1),
+    db.select({ n: count() }).from(clips).where(and(eq(clips.orderId, sourceOf(r)), eq(clips.status, "ready"))),
+    db.select({ evaluation: inspections.evaluation }).from(inspections).where(eq(inspections.orderId, sourceOf(r))).limit(1),
     viewerId
       ? db.select({ status: payments.status, createdAt: payments.createdAt }).from(payments).where(and(eq(payments.orderId, r.order.id), eq(payments.buyerId, viewerId))).orderBy(desc(payments.createdAt)).limit(1)
       : Promise.resolve([]),
@@ -92,12 +95,12 @@ async function preview(r: ReportOrder, viewerId: string | null): Promise<ReportP
 
 async function summary(r: ReportOrder, viewerId: string | null): Promise<ReportSummary | null> {
   const db = await getDb();
-  const [inspection] = await db.select().from(inspections).where(eq(inspections.orderId, r.order.id)).limit(1);
+  const [inspection] = await db.select().from(inspections).where(eq(inspections.orderId, sourceOf(r))).limit(1);
   if (!inspection?.evaluation) return null;
   const [base, clipRows, stillRows] = await Promise.all([
     preview(r, viewerId),
-    db.select().from(clips).where(and(eq(clips.orderId, r.order.id), eq(clips.status, "ready"))).orderBy(clips.createdAt),
-    db.select().from(stills).where(eq(stills.orderId, r.order.id)),
+    db.select().from(clips).where(and(eq(clips.orderId, sourceOf(r)), eq(clips.status, "ready"))).orderBy(clips.createdAt),
+    db.select().from(stills).where(eq(stills.orderId, sourceOf(r))),
   ]);
   const reportClips = await Promise.all(
     clipRows.map(async (c) => ({

@@ -72,6 +72,7 @@ export const createOrderSchema = z
 export type CreateOrderInput = z.infer<typeof createOrderSchema>;
 
 export const quoteSchema = z.object({
+  address: z.object({ street: z.string().trim().max(200), unit: z.string().trim().max(40).optional() }).optional(),
   postalCode: z.string().trim().regex(/^\d{5}$/, "Use the five-digit postal code."),
   cleanoutKnown: z.boolean(),
   buildingSewers: z.number().int().min(1).max(4).default(1),
@@ -122,4 +123,13 @@ export const insuranceUploadSchema = z.object({
   fileName: z.string().trim().min(1).max(200),
   sizeBytes: z.number().int().min(1, "The file is empty.").max(10 * 1024 * 1024, "Keep the certificate under 10 MB."),
   contentType: z.enum(["application/pdf", "image/png", "image/jpeg"], { message: "Upload a PDF, PNG or JPEG." }),
+});
+
+export const reuseOrderSchema = z.object({
+  sourceOrderId: z.uuid("Choose the report to reuse."),
+  buyer: z.object({
+    name: z.string().trim().min(2, "Enter the buyer's name.").max(120),
+    email: z.string().trim().toLowerCase().email("Enter the buyer's e-mail: the report invitation goes there.").max(320),
+  }),
+  timeZone: z.string().max(60).default("America/Los_Angeles"),
 });

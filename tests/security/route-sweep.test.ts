@@ -36,12 +36,12 @@ const BODIES: unknown[] = [
 
 async function snapshot(): Promise<string> {
   const db = await getDb();
-  const tables = await db.execute<{ table_name: string }>(sql`select table_name from information_schema.tables where table_schema = 'public' and table_name not in ('audit_log', 'auth_sessions', '__drizzle_migrations') order by table_name`);
-  const rows = "rows" in tables ? tables.rows : (tables as unknown as { table_name: string }[]);
+  const tables = (await db.execute(sql`select table_name from information_schema.tables where table_schema = 'public' and table_name not in ('audit_log', 'auth_sessions', '__drizzle_migrations') order by table_name`)) as unknown as { rows: { table_name: string }[] };
+  const rows = tables.rows;
   const parts: string[] = [];
   for (const { table_name } of rows) {
-    const data = await db.execute(sql.raw(`select * from "${table_name}" order by 1`));
-    parts.push(`${table_name}:${JSON.stringify("rows" in data ? data.rows : data)}`);
+    const data = (await db.execute(sql.raw(`select * from "${table_name}" order by 1`))) as unknown as { rows: unknown[] };
+    parts.push(`${table_name}:${JSON.stringify(data.rows)}`);
   }
   return parts.join("\n");
 }
