@@ -31,7 +31,9 @@ async function openPglite(dataDir: string | null): Promise<Handle> {
     acquireDataLock(dataDir);
     fs.mkdirSync(path.dirname(dataDir), { recursive: true });
   }
-  const client = await PGlite.create(dataDir ?? "memory://");
+  // Tests start each file from a migrated template (PGlite's own initdb is slow on small machines).
+  const template = !dataDir && process.env.PGLITE_TEMPLATE && fs.existsSync(process.env.PGLITE_TEMPLATE) ? new Blob([fs.readFileSync(process.env.PGLITE_TEMPLATE)]) : null;
+  const client = template ? await PGlite.create({ loadDataDir: template }) : await PGlite.create(dataDir ?? "memory://");
   const db = drizzle({ client, schema });
   await migrate(db, { migrationsFolder });
   return {

@@ -3,6 +3,10 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 
+import { PGlite } from "@electric-sql/pglite";
+import { drizzle } from "drizzle-orm/pglite";
+import { migrate } from "drizzle-orm/pglite/migrator";
+
 import { startMailCatcher } from "@/services/mail-catcher";
 import { startPaymentsStandin } from "@/services/payments-standin";
 import { startStorage } from "@/services/storage";
@@ -12,9 +16,15 @@ export default async function setup() {
   const storage = await startStorage({ port: 0, dir: path.join(dir, "objects") });
   const mail = await startMailCatcher({ port: 0, dir: path.join(dir, "mail") });
   const webhookSecret = "whsec_gradeline_tests";
+  const template = path.join(dir, "pglite-template.tar");
+  const db = await PGlite.create("memory://");
+  await migrate(drizzle({ client: db }), { migrationsFolder: path.join(process.cwd(), "db", "migrations") });
+  fs.writeFileSync(template, Buffer.from(await (await db.dumpDataDir("none")).arrayBuffer()));
+  await db.close();
   const payments = await startPaymentsStandin({ port: 0, webhookSecret });
   Object.assign(process.env, {
     TEST_TMP_DIR: dir,
+    PGLITE_TEMPLATE: template,
     DATA_DIR: dir,
     S3_ENDPOINT: `http://127.0.0.1:${storage.port}`,
     S3_ACCESS_KEY_ID: "S3RVER",
