@@ -23,13 +23,15 @@ import { Input } from "@/components/ui/input";
 import { Money } from "@/components/ui/money";
 import { Select } from "@/components/ui/select";
 import { Skeleton } from "@/components/ui/skeleton";
-import { ORDER_STATUS_LABELS, StatusBadge } from "@/components/ui/status-badge";
-import { formatDateTime } from "@/lib/format";
+import { ORDER_STATUS_LABELS, StatusBadge, type OrderStatus } from "@/components/ui/status-badge";
+import { formatDate, formatDateTime } from "@/lib/format";
 import type { OrderDto, OrderListDto } from "@/lib/orders/dto";
-import { ORDER_STATES } from "@/lib/validations/orders";
 
 type SortKey = "deadline" | "created" | "address" | "status" | "price";
-type StatusFilter = (typeof ORDER_STATES)[number] | "at_risk" | "";
+type StatusFilter = OrderStatus | "at_risk" | "";
+
+// From the badge's table rather than lib/validations, which would pull zod into this bundle.
+const ORDER_STATES = Object.keys(ORDER_STATUS_LABELS) as OrderStatus[];
 
 const LIVE_STATES = new Set(["open", "accepted", "scheduled"]);
 const PAGE_SIZE = 20;
@@ -58,7 +60,7 @@ const columns = col.columns([
   col.accessor("createdAt", {
     id: "created",
     header: "Ordered",
-    cell: ({ row }) => <span className="num text-sm text-ink-2">{formatDateTime(row.original.createdAt, row.original.timeZone)}</span>,
+    cell: ({ row }) => <span className="num text-sm whitespace-nowrap text-ink-2">{formatDate(row.original.createdAt, row.original.timeZone)}</span>,
   }),
   col.accessor("priceCents", { id: "price", header: "Price", cell: ({ row }) => <Money cents={row.original.priceCents} /> }),
 ]);
@@ -91,11 +93,11 @@ function ListingCell({ order }: { order: OrderDto }) {
 }
 
 function DeadlineCell({ order }: { order: OrderDto }) {
-  if (!LIVE_STATES.has(order.status)) return <span className="num text-sm text-ink-2">{formatDateTime(order.deadline, order.timeZone)}</span>;
+  if (!LIVE_STATES.has(order.status)) return <span className="num text-sm text-ink-2">{formatDate(order.deadline, order.timeZone)}</span>;
   return (
     <div>
       <Countdown to={order.deadline} timeZone={order.timeZone} />
-      <p className="num text-xs text-ink-2" aria-hidden="true">
+      <p className="num text-xs whitespace-nowrap text-ink-2" aria-hidden="true">
         {formatDateTime(order.deadline, order.timeZone)}
       </p>
     </div>
@@ -214,7 +216,7 @@ export function OrdersTable() {
             ))}
           </Select>
         </div>
-        <div className="sm:hidden">
+        <div className="md:hidden">
           <label htmlFor={`${statusId}-sort`} className="mb-1.5 block text-sm font-medium text-ink">
             Sort by
           </label>
@@ -308,7 +310,7 @@ export function OrdersTable() {
                 {rows.map((row) => (
                   <tr key={row.id} className={clsx("align-top hover:bg-paper/70", row.original.atRisk.flagged && "bg-danger-bg/40")}>
                     {row.getAllCells().map((cell) => (
-                      <td key={cell.id} className={clsx("px-4 py-3", cell.column.id === "price" && "text-right")}>
+                      <td key={cell.id} className={clsx("px-4 py-3", cell.column.id === "price" && "text-right", cell.column.id === "status" && "w-48")}>
                         <table.FlexRender cell={cell} />
                       </td>
                     ))}

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 
 import { DataList } from "@/components/ui/data-list";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -24,7 +25,16 @@ export default async function MyJobsPage() {
           rows={jobs}
           rowKey={(j) => j.id}
           columns={[
-            { key: "address", header: "Listing", primary: true, cell: (j) => formatAddress(j) },
+            {
+              key: "address",
+              header: "Listing",
+              primary: true,
+              cell: (j) => (
+                <Link href={`/jobs/${j.id}`} className="underline-offset-4 hover:text-teal hover:underline">
+                  {formatAddress(j)}
+                </Link>
+              ),
+            },
             { key: "status", header: "State", cell: (j) => <StatusBadge status={j.status} /> },
             { key: "visit", header: "Visit", cell: (j) => (j.appointmentStart ? <span className="num">{formatDateTime(j.appointmentStart, j.timeZone)}</span> : "Not scheduled") },
             { key: "deadline", header: "Deadline", cell: (j) => <span className="num">{formatDateTime(j.deadline, j.timeZone)}</span> },

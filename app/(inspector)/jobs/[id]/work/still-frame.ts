@@ -1,0 +1,41 @@
+"use client";
+
+/** The frame under the playhead as a JPEG, or null when the browser will not share it (a clip served without CORS). */
+export async function captureFrame(video: HTMLVideoElement, maxWidth = 1280): Promise<Blob | null> {
+  const w = video.videoWidth;
+  const h = video.videoHeight;
+  if (!w || !h) return null;
+  const scale = Math.min(1, maxWidth / w);
+  const canvas = document.createElement("canvas");
+  canvas.width = Math.round(w * scale);
+  canvas.height = Math.round(h * scale);
+  const ctx = canvas.getContext("2d");
+  if (!ctx) return null;
+  try {
+    ctx.drawImage(video, 0, 0, canvas.width, canvas.height);
+    return await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/jpeg", 0.85));
+  } catch {
+    return null;
+  }
+}
+
+async function postJson<T>(url: string, body?: unknown): Promise<T> {
+  const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  const data: unknown = await res.json().catch(() => null);
+  if (!res.ok) throw new Error((data as { error?: { message?: string } } | null)?.error?.message ?? "The still frame could not be stored.");
+  return data as T;
+}
+
+/** Stores a still beside its clip: ask for an upload URL, send the bytes straight to storage, confirm. */
+export async function uploadStill(jobId: string, still: Blob, clipId: string, second: number): Promise<string> {
+  const { stillId, uploadUrl } = await postJson<{ stillId: string; uploadUrl: string }>(`/api/jobs/${jobId}/stills`, {
+    clipId,
+    second,
+    contentType: "image/jpeg",
+    sizeBytes: still.size,
+  });
+  const put = await fetch(uploadUrl, { method: "PUT", headers: { "content-type": "image/jpeg" }, body: still });
+  if (!put.ok) throw new Error("The still frame could not be uploaded.");
+  await postJson(`/api/stills/${stillId}/complete`);
+  return stillId;
+}
