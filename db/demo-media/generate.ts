@@ -23,8 +23,24 @@ type Scene = {
 
 const SCENES: Scene[] = [
   { file: "clay-joints", seconds: 10, startFootage: 0, feetPerSecond: 1.2, wall: [168, 96, 58], jointEvery: 3 },
-  { file: "roots-at-joint", seconds: 12, startFootage: 18, feetPerSecond: 1.0, wall: [150, 88, 56], jointEvery: 3, roots: { from: 24.6, to: 26.2 } },
-  { file: "sag-water", seconds: 8, startFootage: 42, feetPerSecond: 1.1, wall: [176, 178, 168], jointEvery: 14, water: { from: 44, to: 49, depth: 0.35 } },
+  {
+    file: "roots-at-joint",
+    seconds: 12,
+    startFootage: 18,
+    feetPerSecond: 1.0,
+    wall: [150, 88, 56],
+    jointEvery: 3,
+    roots: { from: 24.6, to: 26.2 },
+  },
+  {
+    file: "sag-water",
+    seconds: 8,
+    startFootage: 42,
+    feetPerSecond: 1.1,
+    wall: [176, 178, 168],
+    jointEvery: 14,
+    water: { from: 44, to: 49, depth: 0.35 },
+  },
 ];
 
 function hash(x: number, y: number): number {
@@ -138,7 +154,32 @@ async function render(scene: Scene) {
   const mp4 = path.join(OUT, `${scene.file}.mp4`);
   const ffmpeg = spawn(
     "ffmpeg",
-    ["-y", "-loglevel", "error", "-f", "rawvideo", "-pix_fmt", "rgb24", "-s", `${W}x${H}`, "-r", String(FPS), "-i", "-", "-c:v", "libx264", "-preset", "slow", "-crf", "27", "-pix_fmt", "yuv420p", "-movflags", "+faststart", mp4],
+    [
+      "-y",
+      "-loglevel",
+      "error",
+      "-f",
+      "rawvideo",
+      "-pix_fmt",
+      "rgb24",
+      "-s",
+      `${W}x${H}`,
+      "-r",
+      String(FPS),
+      "-i",
+      "-",
+      "-c:v",
+      "libx264",
+      "-preset",
+      "slow",
+      "-crf",
+      "27",
+      "-pix_fmt",
+      "yuv420p",
+      "-movflags",
+      "+faststart",
+      mp4,
+    ],
     { stdio: ["pipe", "inherit", "inherit"] },
   );
   const frame = Buffer.alloc(W * H * 3);
@@ -147,8 +188,14 @@ async function render(scene: Scene) {
     if (!ffmpeg.stdin.write(frame)) await new Promise((r) => ffmpeg.stdin.once("drain", r));
   }
   ffmpeg.stdin.end();
-  await new Promise((resolve, reject) => ffmpeg.once("exit", (code) => (code === 0 ? resolve(null) : reject(new Error(`ffmpeg exited ${code}`)))));
-  spawnSync("ffmpeg", ["-y", "-loglevel", "error", "-ss", "1", "-i", mp4, "-frames:v", "1", "-q:v", "4", path.join(OUT, `${scene.file}.jpg`)], { stdio: "inherit" });
+  await new Promise((resolve, reject) =>
+    ffmpeg.once("exit", (code) => (code === 0 ? resolve(null) : reject(new Error(`ffmpeg exited ${code}`)))),
+  );
+  spawnSync(
+    "ffmpeg",
+    ["-y", "-loglevel", "error", "-ss", "1", "-i", mp4, "-frames:v", "1", "-q:v", "4", path.join(OUT, `${scene.file}.jpg`)],
+    { stdio: "inherit" },
+  );
   console.log(`${scene.file}.mp4: ${scene.seconds} s from ${scene.startFootage} ft`);
 }
 

@@ -56,17 +56,38 @@ export async function listClipsForOrder(orderId: string) {
 /** Activity on an upload keeps the sweeper away from it. */
 export async function touchClip(clipId: string) {
   const db = await getDb();
-  await db.update(clips).set({ updatedAt: new Date() }).where(and(eq(clips.id, clipId), eq(clips.status, "uploading")));
+  await db
+    .update(clips)
+    .set({ updatedAt: new Date() })
+    .where(and(eq(clips.id, clipId), eq(clips.status, "uploading")));
 }
 
 /** Moves an upload to ready or rejected once; null when another request got there first. */
-export async function finishClip(clipId: string, outcome: { status: "ready"; detectedType: string; durationSeconds: number | null } | { status: "rejected"; reason: string; detectedType?: string | null }) {
+export async function finishClip(
+  clipId: string,
+  outcome:
+    | { status: "ready"; detectedType: string; durationSeconds: number | null }
+    | { status: "rejected"; reason: string; detectedType?: string | null },
+) {
   const db = await getDb();
   const now = new Date();
   const set =
     outcome.status === "ready"
-      ? { status: "ready" as const, detectedType: outcome.detectedType, durationSeconds: outcome.durationSeconds, completedAt: now, updatedAt: now, rejectedReason: null }
-      : { status: "rejected" as const, rejectedReason: outcome.reason, detectedType: outcome.detectedType ?? null, completedAt: now, updatedAt: now };
+      ? {
+          status: "ready" as const,
+          detectedType: outcome.detectedType,
+          durationSeconds: outcome.durationSeconds,
+          completedAt: now,
+          updatedAt: now,
+          rejectedReason: null,
+        }
+      : {
+          status: "rejected" as const,
+          rejectedReason: outcome.reason,
+          detectedType: outcome.detectedType ?? null,
+          completedAt: now,
+          updatedAt: now,
+        };
   const [row] = await db
     .update(clips)
     .set(set)

@@ -29,7 +29,12 @@ export class UploadGoneError extends Error {
 }
 
 export const storageUnavailable = () =>
-  new AppError("unavailable", "Storage is not answering just now. Nothing was lost: try again in a moment and the upload carries on.", undefined, { "Retry-After": "5" });
+  new AppError(
+    "unavailable",
+    "Storage is not answering just now. Nothing was lost: try again in a moment and the upload carries on.",
+    undefined,
+    { "Retry-After": "5" },
+  );
 
 type SdkError = { name?: string; $metadata?: { httpStatusCode?: number } };
 
@@ -42,7 +47,7 @@ async function guard<T>(fn: () => Promise<T>): Promise<T> {
     if (e.name === "NoSuchUpload") throw new UploadGoneError();
     const status = e.$metadata?.httpStatusCode;
     if (status === undefined || status >= 500) {
-      console.error("[storage] unavailable", e.name ?? error);
+      console.error("[storage] not answering:", (error as Error).message || e.name);
       throw storageUnavailable();
     }
     throw error;
@@ -84,7 +89,13 @@ export function signPartUrls(key: string, uploadId: string, plan: UploadPlan, pa
       partNumber,
       url: await getSignedUrl(
         client,
-        new UploadPartCommand({ Bucket: bucket(), Key: key, UploadId: uploadId, PartNumber: partNumber, ContentLength: expectedPartBytes(plan, partNumber) }),
+        new UploadPartCommand({
+          Bucket: bucket(),
+          Key: key,
+          UploadId: uploadId,
+          PartNumber: partNumber,
+          ContentLength: expectedPartBytes(plan, partNumber),
+        }),
         { expiresIn: PART_URL_SECONDS },
       ),
     })),
@@ -95,7 +106,9 @@ export async function listStoredParts(key: string, uploadId: string): Promise<St
   const parts: StoredPart[] = [];
   let marker: string | undefined;
   for (let page = 0; page < 20; page++) {
-    const res = await guard(() => s3().send(new ListPartsCommand({ Bucket: bucket(), Key: key, UploadId: uploadId, PartNumberMarker: marker })));
+    const res = await guard(() =>
+      s3().send(new ListPartsCommand({ Bucket: bucket(), Key: key, UploadId: uploadId, PartNumberMarker: marker })),
+    );
     for (const p of res.Parts ?? []) {
       if (p.PartNumber !== undefined && p.Size !== undefined) parts.push({ partNumber: p.PartNumber, size: p.Size, etag: p.ETag ?? "" });
     }
@@ -136,8 +149,13 @@ export async function listInProgressUploads(prefix: string, maxPages = 50): Prom
   let keyMarker: string | undefined;
   let uploadIdMarker: string | undefined;
   for (let page = 0; page < maxPages; page++) {
-    const res = await guard(() => s3().send(new ListMultipartUploadsCommand({ Bucket: bucket(), Prefix: prefix, KeyMarker: keyMarker, UploadIdMarker: uploadIdMarker })));
-    for (const u of res.Uploads ?? []) if (u.Key && u.UploadId) out.push({ key: u.Key, uploadId: u.UploadId, initiated: u.Initiated ?? null });
+    const res = await guard(() =>
+      s3().send(
+        new ListMultipartUploadsCommand({ Bucket: bucket(), Prefix: prefix, KeyMarker: keyMarker, UploadIdMarker: uploadIdMarker }),
+      ),
+    );
+    for (const u of res.Uploads ?? [])
+      if (u.Key && u.UploadId) out.push({ key: u.Key, uploadId: u.UploadId, initiated: u.Initiated ?? null });
     if (!res.IsTruncated) break;
     keyMarker = res.NextKeyMarker;
     uploadIdMarker = res.NextUploadIdMarker;
@@ -162,7 +180,13 @@ export const readRange = (key: string, start: number, end: number) => guard(() =
 
 export const deleteObject = (key: string) => guard(() => removeObject(key));
 
-const MEDIA_TYPES: Record<string, string> = { mp4: "video/mp4", mov: "video/quicktime", webm: "video/webm", jpg: "image/jpeg", png: "image/png" };
+const MEDIA_TYPES: Record<string, string> = {
+  mp4: "video/mp4",
+  mov: "video/quicktime",
+  webm: "video/webm",
+  jpg: "image/jpeg",
+  png: "image/png",
+};
 export const MEDIA_URL_SECONDS = 15 * 60;
 
 /** A short-lived read URL whose response type is fixed by the key the server made, never by the upload. */

@@ -39,7 +39,8 @@ export type PartProblem = { path: string; message: string };
 /** A completion list must name parts 1..count, each once, in ascending order. */
 export function checkCompletionList(parts: readonly { partNumber: number }[], partCount: number): PartProblem[] {
   const problems: PartProblem[] = [];
-  if (parts.length !== partCount) problems.push({ path: "parts", message: `The upload has ${partCount} part(s); the list names ${parts.length}.` });
+  if (parts.length !== partCount)
+    problems.push({ path: "parts", message: `The upload has ${partCount} part(s); the list names ${parts.length}.` });
   parts.forEach((p, i) => {
     if (!Number.isInteger(p.partNumber) || p.partNumber < 1 || p.partNumber > Math.min(partCount, MAX_PARTS)) {
       problems.push({ path: `parts[${i}].partNumber`, message: `Part numbers run from 1 to ${partCount}.` });
@@ -61,8 +62,10 @@ export function checkStoredParts(plan: UploadPlan, stored: readonly StoredPart[]
     const part = byNumber.get(n);
     const path = `parts[${n - 1}]`;
     if (!part) problems.push({ path, message: `Part ${n} has not arrived in storage.` });
-    else if (n < plan.partCount && part.size < MIN_PART_BYTES) problems.push({ path, message: `Part ${n} holds ${part.size} bytes; every part but the last must hold at least 5 MiB.` });
-    else if (part.size !== expectedPartBytes(plan, n)) problems.push({ path, message: `Part ${n} holds ${part.size} bytes; it must hold ${expectedPartBytes(plan, n)}.` });
+    else if (n < plan.partCount && part.size < MIN_PART_BYTES)
+      problems.push({ path, message: `Part ${n} holds ${part.size} bytes; every part but the last must hold at least 5 MiB.` });
+    else if (part.size !== expectedPartBytes(plan, n))
+      problems.push({ path, message: `Part ${n} holds ${part.size} bytes; it must hold ${expectedPartBytes(plan, n)}.` });
   }
   if (total > plan.sizeBytes || stored.some((p) => p.partNumber > plan.partCount)) {
     problems.push({ path: "parts", message: `More bytes arrived than the ${plan.sizeBytes} declared.` });

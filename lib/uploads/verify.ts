@@ -45,42 +45,53 @@ export async function checkStoredVideo(key: string, declaredBytes: number): Prom
   if (!movie) return { ok: false, reason: "The video has no index (moov box); the recording may have been cut short." };
   if (movie.videoTracks.length === 0) return { ok: false, reason: "The file holds no video track." };
   const duration = movie.timescale > 0 ? movie.duration / movie.timescale : 0;
-  return { ok: true, mime, sizeBytes: head.size, durationSeconds: Number.isFinite(duration) && duration > 0 ? Math.round(duration * 1000) / 1000 : null };
+  return {
+    ok: true,
+    mime,
+    sizeBytes: head.size,
+    durationSeconds: Number.isFinite(duration) && duration > 0 ? Math.round(duration * 1000) / 1000 : null,
+  };
 }
+
+// mp4box reads a movie only after an ftyp; old QuickTime files may have none, so one is made up.
+const QT_FTYP = new Uint8Array([0, 0, 0, 16, 0x66, 0x74, 0x79, 0x70, 0x71, 0x74, 0x20, 0x20, 0, 0, 0, 0]);
 
 /** Walks the top-level boxes with small range reads until moov (phones often write it last). */
 async function readMp4Movie(key: string, size: number, first: Uint8Array): Promise<Movie | null> {
   let offset = 0;
+  let ftyp: Uint8Array = QT_FTYP;
   for (let boxes = 0; boxes < 64 && offset + 8 <= size; boxes++) {
-    const header = offset + 16 <= first.length ? first.subarray(offset, offset + 16) : await readRange(key, offset, Math.min(size, offset + 16) - 1);
+    const header =
+      offset + 16 <= first.length ? first.subarray(offset, offset + 16) : await readRange(key, offset, Math.min(size, offset + 16) - 1);
     const view = new DataView(header.buffer, header.byteOffset, header.byteLength);
     let boxSize = view.getUint32(0);
     const type = String.fromCharCode(...header.subarray(4, 8));
     if (boxSize === 1 && header.length >= 16) boxSize = Number(view.getBigUint64(8));
     else if (boxSize === 0) boxSize = size - offset;
     if (boxSize < 8) return null;
+    if (type === "ftyp" && offset + boxSize <= first.length && boxSize <= 4096) ftyp = first.subarray(offset, offset + boxSize);
     if (type === "moov") {
       if (boxSize > MAX_MOOV_BYTES || offset + boxSize > size) return null;
-      const moov = offset + boxSize <= first.length ? first.slice(offset, offset + boxSize) : await readRange(key, offset, offset + boxSize - 1);
-      return parseMoov(moov);
+      const moov =
+        offset + boxSize <= first.length ? first.subarray(offset, offset + boxSize) : await readRange(key, offset, offset + boxSize - 1);
+      return parseMovie(ftyp, moov);
     }
     offset += boxSize;
   }
   return null;
 }
 
-function parseMoov(moov: Uint8Array): Movie | null {
+function parseMovie(ftyp: Uint8Array, moov: Uint8Array): Movie | null {
+  const bytes = new Uint8Array(ftyp.length + moov.length);
+  bytes.set(ftyp);
+  bytes.set(moov, ftyp.length);
   const file = createFile();
   let movie: Movie | null = null;
   file.onReady = (info) => {
     movie = info;
   };
-  file.onError = () => {
-    movie = null;
-  };
-  const copy = moov.slice().buffer;
   try {
-    file.appendBuffer(MP4BoxBuffer.fromArrayBuffer(copy, 0), true);
+    file.appendBuffer(MP4BoxBuffer.fromArrayBuffer(bytes.buffer, 0), true);
     file.flush();
   } catch {
     return null;
@@ -132,7 +143,8 @@ export function webmDuration(bytes: Uint8Array): number | null {
     if (id.value === CLUSTER) break;
     if (size.unknown || body + size.value > bytes.length) break;
     const view = new DataView(bytes.buffer, bytes.byteOffset + body, size.value);
-    if (id.value === TIMECODE_SCALE && size.value <= 6) scale = [...bytes.subarray(body, body + size.value)].reduce((n, b) => n * 256 + b, 0);
+    if (id.value === TIMECODE_SCALE && size.value <= 6)
+      scale = [...bytes.subarray(body, body + size.value)].reduce((n, b) => n * 256 + b, 0);
     if (id.value === DURATION) duration = size.value === 4 ? view.getFloat32(0) : size.value === 8 ? view.getFloat64(0) : null;
     at = body + size.value;
   }
@@ -142,7 +154,10 @@ export function webmDuration(bytes: Uint8Array): number | null {
 const IMAGE_TYPES = new Set(["image/jpeg", "image/png"]);
 
 /** A poster or still: a real JPEG or PNG under the size limit, judged by its bytes. */
-export async function checkStoredImage(key: string, maxBytes: number): Promise<{ ok: true; mime: string } | { ok: false; reason: string; gone?: boolean }> {
+export async function checkStoredImage(
+  key: string,
+  maxBytes: number,
+): Promise<{ ok: true; mime: string } | { ok: false; reason: string; gone?: boolean }> {
   const head = await headObject(key);
   if (!head) return { ok: false, reason: "The image did not arrive in storage. Upload it again.", gone: true };
   if (head.size === 0) return { ok: false, reason: "The image is empty." };

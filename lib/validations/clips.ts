@@ -14,7 +14,10 @@ export const clipFileNameSchema = z
   .string()
   .min(1, "The file needs a name.")
   .max(255, "Keep the file name under 256 characters.")
-  .refine((name) => !UNSAFE_NAME.test(name) && name !== "." && name !== "..", "The file name may not contain slashes, '..' paths or control characters.");
+  .refine(
+    (name) => !UNSAFE_NAME.test(name) && name !== "." && name !== "..",
+    "The file name may not contain slashes, '..' paths or control characters.",
+  );
 
 const footage = z.number().min(0, "Footage starts at 0 ft.").max(MAX_FOOTAGE_FT, `Keep the footage under ${MAX_FOOTAGE_FT} ft.`);
 
@@ -38,7 +41,12 @@ export const partsQuerySchema = z
 
 export const completeClipSchema = z.object({
   parts: z
-    .array(z.object({ partNumber: z.number().int().min(1, "Part numbers start at 1.").max(MAX_PARTS, `Part numbers stop at ${MAX_PARTS}.`), etag: z.string().min(1).max(200) }))
+    .array(
+      z.object({
+        partNumber: z.number().int().min(1, "Part numbers start at 1.").max(MAX_PARTS, `Part numbers stop at ${MAX_PARTS}.`),
+        etag: z.string().min(1).max(200),
+      }),
+    )
     .min(1, "List the parts you uploaded.")
     .max(MAX_PARTS),
 });
@@ -57,7 +65,11 @@ export const posterCompleteSchema = z.object({ key: z.string().min(1).max(300) }
 export const stillUploadSchema = z.object({
   ...imageUpload,
   clipId: z.uuid("Not a valid clip id.").optional(),
-  second: z.number().min(0).max(24 * 3600).optional(),
+  second: z
+    .number()
+    .min(0)
+    .max(24 * 3600)
+    .optional(),
 });
 export type StillUploadInput = z.infer<typeof stillUploadSchema>;
 

@@ -10,6 +10,7 @@ import { env, EnvError } from "@/lib/env";
 import { startOutboxWorker } from "@/lib/mail/outbox-worker";
 import { startAtRiskSweeper } from "@/lib/orders/at-risk-sweep";
 import { startPayoutWorker } from "@/lib/payments/payouts";
+import { startUploadSweeper } from "@/lib/uploads/sweeper";
 import { ensureBucket } from "@/lib/storage/client";
 import { startMailCatcher } from "@/services/mail-catcher";
 import { startPaymentsStandin } from "@/services/payments-standin";
@@ -60,6 +61,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   const stopOutbox = startOutboxWorker();
   const stopAtRisk = startAtRiskSweeper();
   const stopPayouts = startPayoutWorker();
+  const stopUploads = startUploadSweeper();
 
   const app = next({ dev: opts.dev, hostname: e.HOST, port: e.PORT, dir: process.cwd() });
   const handle = app.getRequestHandler();
@@ -81,6 +83,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
     stopOutbox();
     stopAtRisk();
     stopPayouts();
+    stopUploads();
     const force = setTimeout(() => server.closeAllConnections(), 10_000);
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
