@@ -10,7 +10,7 @@ export default defineConfig({
   },
   test: {
     include: ["tests/**/*.test.ts"],
-    exclude: ["tests/browser/**", "node_modules/**"],
+    exclude: ["tests/browser/**", "tests/server/**", "node_modules/**"],
     globalSetup: ["tests/utils/global-setup.ts"],
     setupFiles: ["tests/utils/setup-file.ts"],
     testTimeout: 30_000,
