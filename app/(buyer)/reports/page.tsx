@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 
 import { DataList } from "@/components/ui/data-list";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -25,7 +26,16 @@ export default async function MyReportsPage() {
           rows={reports}
           rowKey={(r) => r.id}
           columns={[
-            { key: "address", header: "Listing", primary: true, cell: (r) => formatAddress(r) },
+            {
+              key: "address",
+              header: "Listing",
+              primary: true,
+              cell: (r) => (
+                <Link href={`/reports/${r.id}`} className="font-medium text-teal underline underline-offset-4">
+                  {formatAddress(r)}
+                </Link>
+              ),
+            },
             { key: "status", header: "State", cell: (r) => <StatusBadge status={r.status} /> },
             { key: "visit", header: "Inspected", cell: (r) => (r.appointmentStart ? <span className="num">{formatDate(r.appointmentStart, r.timeZone)}</span> : "—") },
             { key: "inspector", header: "Inspector", cell: (r) => r.inspectorName ?? "—" },
