@@ -6,7 +6,7 @@ import { DEFAULT_TIME_ZONE, zonedLocalToIso } from "@/lib/time-zones";
 import type { AuditQuery } from "@/lib/validations/admin";
 
 import { getDb } from "../client";
-import { auditLog, type Role, users } from "../schema";
+import { auditLog, users, type Role } from "../schema";
 
 export type AuditEntryDto = {
   id: string;
@@ -51,7 +51,10 @@ export async function listAudit(q: AuditQuery, timeZone = DEFAULT_TIME_ZONE): Pr
       id: entry.id,
       at: entry.at.toISOString(),
       action: entry.action,
-      actor: entry.actorId && actorEmail && actorName && actorRole ? { id: entry.actorId, name: actorName, email: actorEmail, role: actorRole } : null,
+      actor:
+        entry.actorId && actorEmail && actorName && actorRole
+          ? { id: entry.actorId, name: actorName, email: actorEmail, role: actorRole }
+          : null,
       target: entry.targetType ? { type: entry.targetType, id: entry.targetId } : null,
       ip: entry.ip,
       data: entry.data,

@@ -41,7 +41,10 @@ export const utcToday = () => new Date().toISOString().slice(0, 10);
 
 const verifier = alias(users, "verifier");
 
-function statusOf(p: { licenceNumber: string | null; verifiedAt: Date | null; rejectedReason: string | null } | null, licenceValid: boolean): InspectorStatus {
+function statusOf(
+  p: { licenceNumber: string | null; verifiedAt: Date | null; rejectedReason: string | null } | null,
+  licenceValid: boolean,
+): InspectorStatus {
   if (!p?.licenceNumber) return "no_profile";
   if (p.verifiedAt) return licenceValid ? "verified" : "licence_expired";
   return p.rejectedReason ? "changes_asked" : "awaiting";
@@ -53,7 +56,9 @@ export async function listInspectorsForAdmin(filter: "queue" | "all" = "all", id
   const where = and(
     eq(users.role, "inspector"),
     ids ? inArray(users.id, ids) : undefined,
-    filter === "queue" ? and(isNull(inspectorProfiles.verifiedAt), isNotNull(inspectorProfiles.licenceNumber), isNull(users.disabledAt)) : undefined,
+    filter === "queue"
+      ? and(isNull(inspectorProfiles.verifiedAt), isNotNull(inspectorProfiles.licenceNumber), isNull(users.disabledAt))
+      : undefined,
   );
   const rows = await db
     .select({ user: users, profile: inspectorProfiles, verifierName: verifier.name })
@@ -67,7 +72,12 @@ export async function listInspectorsForAdmin(filter: "queue" | "all" = "all", id
   const areas = await db
     .select({ inspectorId: serviceAreas.inspectorId, postalCode: serviceAreas.postalCode })
     .from(serviceAreas)
-    .where(inArray(serviceAreas.inspectorId, rows.map((r) => r.user.id)))
+    .where(
+      inArray(
+        serviceAreas.inspectorId,
+        rows.map((r) => r.user.id),
+      ),
+    )
     .orderBy(asc(serviceAreas.postalCode));
   const codes = new Map<string, string[]>();
   for (const a of areas) codes.set(a.inspectorId, [...(codes.get(a.inspectorId) ?? []), a.postalCode]);
@@ -77,7 +87,13 @@ export async function listInspectorsForAdmin(filter: "queue" | "all" = "all", id
       const licenceValid = !!profile?.licenceExpiresOn && profile.licenceExpiresOn >= today;
       const insurance =
         profile?.insuranceKey && profile.insuranceFileName
-          ? { fileName: profile.insuranceFileName, url: await signedDownloadUrl(profile.insuranceKey, { attachmentName: profile.insuranceFileName, expiresIn: INSURANCE_LINK_SECONDS }) }
+          ? {
+              fileName: profile.insuranceFileName,
+              url: await signedDownloadUrl(profile.insuranceKey, {
+                attachmentName: profile.insuranceFileName,
+                expiresIn: INSURANCE_LINK_SECONDS,
+              }),
+            }
           : null;
       return {
         id: user.id,
@@ -132,7 +148,10 @@ export async function decideVerification(input: {
       if (!profile.licenceNumber || !profile.licenceExpiresOn) return { ok: false, problem: "no_licence" };
       if (profile.licenceExpiresOn < utcToday()) return { ok: false, problem: "licence_expired" };
       if (profile.verifiedAt) return { ok: true, changed: false };
-      await tx.update(inspectorProfiles).set({ verifiedAt: now, verifiedBy: input.admin.id, rejectedReason: null, updatedAt: now }).where(eq(inspectorProfiles.userId, user.id));
+      await tx
+        .update(inspectorProfiles)
+        .set({ verifiedAt: now, verifiedBy: input.admin.id, rejectedReason: null, updatedAt: now })
+        .where(eq(inspectorProfiles.userId, user.id));
       await enqueueMail(
         {
           key: `inspector:${user.id}:verified:${now.toISOString()}`,
@@ -153,7 +172,10 @@ export async function decideVerification(input: {
     } else {
       const reason = input.reason ?? "";
       if (!profile.verifiedAt && profile.rejectedReason === reason) return { ok: true, changed: false };
-      await tx.update(inspectorProfiles).set({ verifiedAt: null, verifiedBy: null, rejectedReason: reason, updatedAt: now }).where(eq(inspectorProfiles.userId, user.id));
+      await tx
+        .update(inspectorProfiles)
+        .set({ verifiedAt: null, verifiedBy: null, rejectedReason: reason, updatedAt: now })
+        .where(eq(inspectorProfiles.userId, user.id));
       await enqueueMail(
         {
           key: `inspector:${user.id}:changes-asked:${now.toISOString()}`,
@@ -161,7 +183,11 @@ export async function decideVerification(input: {
           subject: "Gradeline needs a change to your profile",
           ...renderMail({
             heading: "Your verification needs a change",
-            paragraphs: ["An admin looked at your licence and insurance and could not verify your account yet:", reason, "Update your profile and we will look again. The job board opens once you are verified."],
+            paragraphs: [
+              "An admin looked at your licence and insurance and could not verify your account yet:",
+              reason,
+              "Update your profile and we will look again. The job board opens once you are verified.",
+            ],
             action: { label: "Open your profile", path: "/profile" },
           }),
         },
@@ -193,15 +219,29 @@ export async function decideVerification(input: {
 export async function listVerifiedWithExpiredLicence(today = utcToday()) {
   const db = await getDb();
   return db
-    .select({ id: users.id, email: users.email, name: users.name, licenceNumber: inspectorProfiles.licenceNumber, licenceExpiresOn: inspectorProfiles.licenceExpiresOn })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      licenceNumber: inspectorProfiles.licenceNumber,
+      licenceExpiresOn: inspectorProfiles.licenceExpiresOn,
+    })
     .from(inspectorProfiles)
     .innerJoin(users, eq(users.id, inspectorProfiles.userId))
-    .where(and(isNotNull(inspectorProfiles.verifiedAt), sql`(${inspectorProfiles.licenceExpiresOn} is null or ${inspectorProfiles.licenceExpiresOn} < ${today})`))
+    .where(
+      and(
+        isNotNull(inspectorProfiles.verifiedAt),
+        sql`(${inspectorProfiles.licenceExpiresOn} is null or ${inspectorProfiles.licenceExpiresOn} < ${today})`,
+      ),
+    )
     .limit(500);
 }
 
 /** Un-verifies one inspector whose licence expired, with its e-mail (once per expiry date) and audit row. */
-export async function unverifyExpiredLicence(inspector: { id: string; email: string; name: string; licenceNumber: string | null; licenceExpiresOn: string | null }, today = utcToday()): Promise<boolean> {
+export async function unverifyExpiredLicence(
+  inspector: { id: string; email: string; name: string; licenceNumber: string | null; licenceExpiresOn: string | null },
+  today = utcToday(),
+): Promise<boolean> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [claimed] = await tx
@@ -238,7 +278,14 @@ export async function unverifyExpiredLicence(inspector: { id: string; email: str
       tx,
     );
     await recordAudit(
-      { actorId: null, action: "inspector.licence_expired", targetType: "user", targetId: inspector.id, ip: "system", data: { email: inspector.email, licenceNumber: inspector.licenceNumber, licenceExpiresOn: claimed.licenceExpiresOn } },
+      {
+        actorId: null,
+        action: "inspector.licence_expired",
+        targetType: "user",
+        targetId: inspector.id,
+        ip: "system",
+        data: { email: inspector.email, licenceNumber: inspector.licenceNumber, licenceExpiresOn: claimed.licenceExpiresOn },
+      },
       tx,
     );
     return true;

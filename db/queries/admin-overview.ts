@@ -5,7 +5,7 @@ import { and, count, eq, gte, isNotNull, isNull, lt, sql } from "drizzle-orm";
 import { DEFAULT_TIME_ZONE, zonedLocalToIso } from "@/lib/time-zones";
 
 import { getDb } from "../client";
-import { inspectorProfiles, ledgerEntries, users } from "../schema";
+import { disputes, inspectorProfiles, ledgerEntries, users } from "../schema";
 
 export type MonthMoney = {
   /** First day of the month, YYYY-MM-DD, in the market's time zone. */
@@ -23,7 +23,11 @@ export function monthBounds(now: Date, timeZone: string): { month: string; start
   const [y, m] = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit" }).format(now).split("-").map(Number);
   const first = `${y}-${String(m).padStart(2, "0")}-01`;
   const next = m === 12 ? `${y + 1}-01-01` : `${y}-${String(m + 1).padStart(2, "0")}-01`;
-  return { month: first, start: new Date(zonedLocalToIso(first, "00:00", timeZone)!), end: new Date(zonedLocalToIso(next, "00:00", timeZone)!) };
+  return {
+    month: first,
+    start: new Date(zonedLocalToIso(first, "00:00", timeZone)!),
+    end: new Date(zonedLocalToIso(next, "00:00", timeZone)!),
+  };
 }
 
 /** Money in the ledger this calendar month: charges, refunds and platform fees, in cents. */
@@ -48,6 +52,19 @@ export async function countVerificationQueue(): Promise<number> {
     .select({ n: count() })
     .from(inspectorProfiles)
     .innerJoin(users, eq(users.id, inspectorProfiles.userId))
-    .where(and(eq(users.role, "inspector"), isNull(users.disabledAt), isNull(inspectorProfiles.verifiedAt), isNotNull(inspectorProfiles.licenceNumber)));
+    .where(
+      and(
+        eq(users.role, "inspector"),
+        isNull(users.disabledAt),
+        isNull(inspectorProfiles.verifiedAt),
+        isNotNull(inspectorProfiles.licenceNumber),
+      ),
+    );
+  return Number(row?.n ?? 0);
+}
+
+export async function countOpenDisputes(): Promise<number> {
+  const db = await getDb();
+  const [row] = await db.select({ n: count() }).from(disputes).where(eq(disputes.status, "open"));
   return Number(row?.n ?? 0);
 }

@@ -5,10 +5,18 @@ import { and, asc, count, eq, ilike, isNotNull, isNull, or, sql, type SQL } from
 import type { UserSearchQuery } from "@/lib/validations/admin";
 
 import { getDb } from "../client";
-import { type Role, users } from "../schema";
+import { users, type Role } from "../schema";
 import { recordAudit } from "./audit";
 
-export type AdminUserDto = { id: string; name: string; email: string; role: Role; company: string | null; disabled: boolean; createdAt: string };
+export type AdminUserDto = {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  company: string | null;
+  disabled: boolean;
+  createdAt: string;
+};
 export type AdminUserPage = { users: AdminUserDto[]; total: number; page: number; pageSize: number };
 
 const toDto = (u: typeof users.$inferSelect): AdminUserDto => ({
@@ -78,8 +86,24 @@ export async function changeUser(userId: string, change: UserChange, actor: { id
       .where(eq(users.id, userId))
       .returning();
     const target = { actorId: actor.id, targetType: "user", targetId: userId, ip: actor.ip } as const;
-    if (disable) await recordAudit({ ...target, action: change.disabled ? "admin.user_disabled" : "admin.user_enabled", data: { email: before.email, reason: change.reason } }, tx);
-    if (role) await recordAudit({ ...target, action: "admin.user_role_changed", data: { email: before.email, from: before.role, to: change.role, reason: change.reason } }, tx);
+    if (disable)
+      await recordAudit(
+        {
+          ...target,
+          action: change.disabled ? "admin.user_disabled" : "admin.user_enabled",
+          data: { email: before.email, reason: change.reason },
+        },
+        tx,
+      );
+    if (role)
+      await recordAudit(
+        {
+          ...target,
+          action: "admin.user_role_changed",
+          data: { email: before.email, from: before.role, to: change.role, reason: change.reason },
+        },
+        tx,
+      );
     return toDto(after);
   });
 }

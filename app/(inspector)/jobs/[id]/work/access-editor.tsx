@@ -45,7 +45,13 @@ export function AccessEditor() {
   return (
     <>
       <ChoiceField<AccessKind> name="access.kind" legend="Where the camera went in" options={KINDS} />
-      <Field id={fieldId("access.note")} label="Where it is" optional hint="So the next person finds it: “Basement, behind the water heater”." error={errorFor("access.note")}>
+      <Field
+        id={fieldId("access.note")}
+        label="Where it is"
+        optional
+        hint="So the next person finds it: “Basement, behind the water heater”."
+        error={errorFor("access.note")}
+      >
         {(c) => <Textarea rows={2} {...c} {...register("access.note")} />}
       </Field>
       <SelectField name="access.diameterIn" label="Diameter at the opening" optional className="max-w-64">

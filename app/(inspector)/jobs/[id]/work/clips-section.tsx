@@ -2,6 +2,7 @@
 
 import { useEffect, useRef, useState } from "react";
 
+import { ClipPlayer, type ClipPlayerHandle } from "@/components/clip-player";
 import { ClipUploader } from "@/components/clip-uploader";
 import { Alert } from "@/components/ui/alert";
 import { Badge, type BadgeTone } from "@/components/ui/badge";
@@ -10,7 +11,7 @@ import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 
 import { proposeFootage } from "./problem-fields";
-import { captureFrame } from "./still-frame";
+import { frameAt } from "./still-frame";
 import type { ClipStatus, ClipSummary } from "./use-clips";
 
 const STATUS: Record<ClipStatus, { label: string; tone: BadgeTone }> = {
@@ -45,7 +46,9 @@ export function ClipsSection({
         <ClipUploader jobId={jobId} onClipReady={() => onReload()} />
       </div>
       {error ? <Alert tone="warning">{error.message}</Alert> : null}
-      {clips.length === 0 && !error ? <p className="text-ink-2 text-sm">No clips yet. Upload the runs you recorded; at least one must be ready before you submit.</p> : null}
+      {clips.length === 0 && !error ? (
+        <p className="text-ink-2 text-sm">No clips yet. Upload the runs you recorded; at least one must be ready before you submit.</p>
+      ) : null}
       {clips.length > 0 ? (
         <ul className="divide-rule border-rule divide-y rounded-md border bg-white">
           {clips.map((c) => (
@@ -69,7 +72,12 @@ export function ClipsSection({
                 </p>
               </div>
               {c.status === "ready" ? (
-                <Button variant={watching === c.id ? "primary" : "secondary"} className="min-h-11" aria-pressed={watching === c.id} onClick={() => setWatching(watching === c.id ? null : c.id)}>
+                <Button
+                  variant={watching === c.id ? "primary" : "secondary"}
+                  className="min-h-11"
+                  aria-pressed={watching === c.id}
+                  onClick={() => setWatching(watching === c.id ? null : c.id)}
+                >
                   {watching === c.id ? "Close" : "Watch"}
                   <span className="sr-only"> {c.label}</span>
                 </Button>
@@ -95,10 +103,19 @@ function usePushSpeed(): [string, (v: string) => void] {
   ];
 }
 
+async function signedUrl(clipId: string): Promise<string | null> {
+  try {
+    const res = await fetch(`/api/clips/${clipId}`, { headers: { accept: "application/json" }, cache: "no-store" });
+    const body = (await res.json()) as { clip?: { playbackUrl?: string | null }; playbackUrl?: string | null };
+    return (res.ok && (body.playbackUrl ?? body.clip?.playbackUrl)) || null;
+  } catch {
+    return null;
+  }
+}
+
 function ClipViewer({ clip, onAddFinding }: { clip: ClipSummary; onAddFinding: (moment: ClipMoment) => void }) {
-  const video = useRef<HTMLVideoElement>(null);
-  const [url, setUrl] = useState<string | null>(null);
-  const [loadError, setLoadError] = useState<string | null>(null);
+  const player = useRef<ClipPlayerHandle>(null);
+  const [url, setUrl] = useState<{ src: string | null } | null>(null);
   const [second, setSecond] = useState(0);
   const [speedText, setSpeedText] = usePushSpeed();
   const [busy, setBusy] = useState(false);
@@ -107,66 +124,58 @@ function ClipViewer({ clip, onAddFinding }: { clip: ClipSummary; onAddFinding: (
 
   useEffect(() => {
     let live = true;
-    fetch(`/api/clips/${clip.id}`, { headers: { accept: "application/json" } })
-      .then(async (res) => {
-        if (!res.ok) throw new Error();
-        const body = (await res.json()) as { clip?: { playbackUrl?: string }; playbackUrl?: string };
-        const playback = body.clip?.playbackUrl ?? body.playbackUrl;
-        if (!playback) throw new Error();
-        if (live) setUrl(playback);
-      })
-      .catch(() => live && setLoadError("This clip cannot be played just now. Try again in a moment."));
+    void signedUrl(clip.id).then((src) => live && setUrl({ src }));
     return () => {
       live = false;
     };
   }, [clip.id]);
 
   async function addHere() {
-    const v = video.current;
-    if (!v) return;
-    v.pause();
+    const at = player.current?.currentTime() ?? second;
+    player.current?.pause();
     setBusy(true);
-    const at = v.currentTime;
-    const still = await captureFrame(v);
+    // A freshly signed URL: the player's own request is cached without CORS headers, and reusing it would taint the canvas.
+    const fresh = await signedUrl(clip.id);
+    const still = fresh ? await frameAt(fresh, at) : null;
     setBusy(false);
-    onAddFinding({ clip, second: Math.round(at * 10) / 10, footage: proposeFootage(clip.startFootage, at, speed), speed, still });
+    const rounded = Math.round(at * 10) / 10;
+    onAddFinding({ clip, second: rounded, footage: proposeFootage(clip.startFootage, at, speed), speed, still });
   }
 
   return (
     <div className="border-rule space-y-3 rounded-md border bg-white p-3">
       <h3 className="font-sans text-[0.9375rem] font-semibold">{clip.label}</h3>
-      {loadError ? <Alert tone="warning">{loadError}</Alert> : null}
       {url ? (
-        <video
-          ref={video}
-          src={url}
-          poster={clip.posterUrl ?? undefined}
-          controls
-          playsInline
-          preload="metadata"
-          crossOrigin="anonymous"
-          onTimeUpdate={(e) => setSecond(e.currentTarget.currentTime)}
-          onSeeked={(e) => setSecond(e.currentTarget.currentTime)}
-          className="aspect-video w-full rounded-sm bg-black"
-        >
-          <track kind="captions" label="No speech" srcLang="en" src="data:text/vtt,WEBVTT" />
-        </video>
-      ) : !loadError ? (
-        <div className="bg-paper-2 text-ink-2 flex aspect-video w-full items-center justify-center rounded-sm text-sm">Loading the clip…</div>
-      ) : null}
+        <ClipPlayer ref={player} clipId={clip.id} label={clip.label} posterUrl={clip.posterUrl} src={url.src} onTimeUpdate={setSecond} />
+      ) : (
+        <div className="bg-paper-2 text-ink-2 flex aspect-video w-full items-center justify-center rounded-sm text-sm">
+          Loading the clip…
+        </div>
+      )}
       <div className="grid items-end gap-3 sm:grid-cols-[10rem_1fr]">
         <Field label="Pushing speed (ft/s)" hint="How fast you fed the cable.">
           {(c) => (
-            <Input type="number" inputMode="decimal" step={0.1} min={0.1} className="num min-h-11" value={speedText} onChange={(e) => setSpeedText(e.target.value)} {...c} />
+            <Input
+              type="number"
+              inputMode="decimal"
+              step={0.1}
+              min={0.1}
+              className="num min-h-11"
+              value={speedText}
+              onChange={(e) => setSpeedText(e.target.value)}
+              {...c}
+            />
           )}
         </Field>
         <p className="text-sm">
-          At <span className="num">{secondsText(second)}</span> the footage is about <span className="num font-semibold">{footage.toFixed(1)} ft</span>
+          At <span className="num">{secondsText(second)}</span> the footage is about{" "}
+          <span className="num font-semibold">{footage.toFixed(1)} ft</span>
           <span className="text-ink-2">
             {" "}
-            — a proposal: {clip.startFootage !== null ? <span className="num">{clip.startFootage.toFixed(1)} ft</span> : "0 ft (no start footage)"} +{" "}
-            <span className="num">{second.toFixed(1)} s</span> × <span className="num">{Number.isFinite(speed) ? speed : 0} ft/s</span>. Check it against the counter
-            on the video.
+            — a proposal:{" "}
+            {clip.startFootage !== null ? <span className="num">{clip.startFootage.toFixed(1)} ft</span> : "0 ft (no start footage)"} +{" "}
+            <span className="num">{second.toFixed(1)} s</span> × <span className="num">{Number.isFinite(speed) ? speed : 0} ft/s</span>.
+            Check it against the counter on the video.
           </span>
         </p>
       </div>

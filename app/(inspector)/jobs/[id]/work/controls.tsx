@@ -15,6 +15,8 @@ import { useWorkspace } from "./workspace-context";
 
 export type FormPath = FieldPath<WorkspaceForm>;
 
+const UNIT_WORDS: Record<string, string> = { ft: "feet", "%": "percent", s: "seconds" };
+
 /** A number typed in the field, in mono, with its unit shown inside the box and spoken in the label. */
 export function NumberField({
   name,
@@ -41,14 +43,31 @@ export function NumberField({
   const path = recordPath(name);
   const error = useWorkspace().errorFor(path);
   return (
-    <Field id={fieldId(path)} label={
+    <Field
+      id={fieldId(path)}
+      label={
         <>
-          {label} <span className="text-ink-2 font-normal">({unit})</span>
+          {label}
+          <span className="sr-only"> ({UNIT_WORDS[unit] ?? unit})</span>
         </>
-      } hint={hint} error={error} optional={optional} className={className}>
+      }
+      hint={hint}
+      error={error}
+      optional={optional}
+      className={className}
+    >
       {(control) => (
         <div className="relative">
-          <Input type="number" inputMode="decimal" step={step} min={min} max={max} className="num min-h-11 pr-10" {...control} {...register(name)} />
+          <Input
+            type="number"
+            inputMode="decimal"
+            step={step}
+            min={min}
+            max={max}
+            className="num min-h-11 pr-10"
+            {...control}
+            {...register(name)}
+          />
           <span aria-hidden="true" className="num text-ink-2 pointer-events-none absolute top-1/2 right-3 -translate-y-1/2 text-sm">
             {unit}
           </span>
@@ -110,9 +129,15 @@ export function ChoiceField<T extends string>({
         {options.map((o, i) => (
           <label
             key={o.value}
-            className="border-rule-strong has-[:checked]:border-teal has-[:checked]:bg-teal-50 has-[:focus-visible]:outline-teal flex min-h-12 cursor-pointer items-start gap-3 rounded-md border bg-white px-3 py-2.5 has-[:focus-visible]:outline-2"
+            className="border-rule-strong has-[:checked]:border-teal has-[:focus-visible]:outline-teal flex min-h-12 cursor-pointer items-start gap-3 rounded-md border bg-white px-3 py-2.5 has-[:checked]:bg-teal-50 has-[:focus-visible]:outline-2"
           >
-            <input type="radio" value={o.value} id={i === 0 ? fieldId(path) : undefined} className="accent-teal mt-0.5 size-4.5 shrink-0" {...register(name)} />
+            <input
+              type="radio"
+              value={o.value}
+              id={i === 0 ? fieldId(path) : undefined}
+              className="accent-teal mt-0.5 size-4.5 shrink-0"
+              {...register(name)}
+            />
             <span className="text-[0.9375rem]">
               {o.label}
               {o.hint ? <span className="text-ink-2 block text-sm">{o.hint}</span> : null}
@@ -174,7 +199,11 @@ export function ClockPicker({ name }: { name: FormPath }) {
         const [from = "", to = ""] = String(field.value ?? "").split("-");
         const set = (f: string, t: string) => field.onChange(f === "" ? "" : t === "" || t === f ? f : `${f}-${t}`);
         return (
-          <Fieldset legend="Clock position" hint="Looking downstream; 12 is the top of the pipe. Leave the second hour empty for one position." error={error}>
+          <Fieldset
+            legend="Clock position"
+            hint="Looking downstream; 12 is the top of the pipe. Leave the second hour empty for one position."
+            error={error}
+          >
             <div className="grid grid-cols-2 gap-2">
               <Field id={fieldId(path)} label="At or from" optional>
                 {(c) => (
@@ -190,7 +219,14 @@ export function ClockPicker({ name }: { name: FormPath }) {
               </Field>
               <Field label="To" optional>
                 {(c) => (
-                  <Select className="num min-h-11" {...c} value={to} disabled={from === ""} onChange={(e) => set(from, e.target.value)} onBlur={field.onBlur}>
+                  <Select
+                    className="num min-h-11"
+                    {...c}
+                    value={to}
+                    disabled={from === ""}
+                    onChange={(e) => set(from, e.target.value)}
+                    onBlur={field.onBlur}
+                  >
                     <option value="">One position</option>
                     {HOURS.map((h) => (
                       <option key={h} value={String(h)}>

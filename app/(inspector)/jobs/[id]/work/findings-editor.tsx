@@ -47,8 +47,8 @@ export function FindingsEditor({ proposals }: { proposals: Map<string, FootagePr
   return (
     <div className="space-y-4">
       <p className="text-ink-2 text-sm">
-        One entry per defect. Give an end footage for a defect that runs along the pipe. While watching a clip, “Add a finding here” fills in the clip,
-        the second and a proposed footage.
+        One entry per defect. Give an end footage for a defect that runs along the pipe. While watching a clip, “Add a finding here” fills
+        in the clip, the second and a proposed footage.
       </p>
       <ol className="space-y-3">
         {fields.map((f, i) => {
@@ -109,7 +109,15 @@ export function FindingsEditor({ proposals }: { proposals: Map<string, FootagePr
                   <ClockPicker name={`findings.${i}.clock`} />
                 </div>
                 {share ? (
-                  <NumberField name={share === "water" ? `findings.${i}.waterDepthPct` : `findings.${i}.lossPct`} label={SHARE_FIELDS[share].label} unit="%" step={1} max={100} hint={SHARE_FIELDS[share].hint} optional={share !== "water"} />
+                  <NumberField
+                    name={share === "water" ? `findings.${i}.waterDepthPct` : `findings.${i}.lossPct`}
+                    label={SHARE_FIELDS[share].label}
+                    unit="%"
+                    step={1}
+                    max={100}
+                    hint={SHARE_FIELDS[share].hint}
+                    optional={share !== "water"}
+                  />
                 ) : null}
                 <SelectField name={`findings.${i}.clipId`} label="Clip" optional className={share ? undefined : "sm:col-start-1"}>
                   <option value="">No clip</option>
@@ -118,11 +126,19 @@ export function FindingsEditor({ proposals }: { proposals: Map<string, FootagePr
                       {c.label}
                     </option>
                   ))}
-                  {v.clipId && !readyClips.some((c) => c.id === v.clipId) ? <option value={v.clipId}>A clip that is not ready</option> : null}
+                  {v.clipId && !readyClips.some((c) => c.id === v.clipId) ? (
+                    <option value={v.clipId}>A clip that is not ready</option>
+                  ) : null}
                 </SelectField>
                 {v.clipId ? <NumberField name={`findings.${i}.second`} label="Second in the clip" unit="s" optional /> : null}
                 {v.stillId ? <p className="text-ink-2 self-end text-sm sm:col-span-2">A still frame from the clip is attached.</p> : null}
-                <Field id={fieldId(`findings[${i}].note`)} label="Note" optional error={errorFor(`findings[${i}].note`)} className="sm:col-span-2">
+                <Field
+                  id={fieldId(`findings[${i}].note`)}
+                  label="Note"
+                  optional
+                  error={errorFor(`findings[${i}].note`)}
+                  className="sm:col-span-2"
+                >
                   {(c) => <Textarea rows={2} {...c} {...register(`findings.${i}.note`)} />}
                 </Field>
               </div>

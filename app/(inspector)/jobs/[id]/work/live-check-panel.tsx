@@ -34,13 +34,21 @@ export function LiveCheckPanel({ check, problems, onGo }: { check: LiveCheck; pr
             </>
           ) : (
             <span className="text-ink">
-              <span className="num font-semibold">{problems.length}</span> {problems.length === 1 ? "thing" : "things"} to fix before the line can be rated
+              <span className="num font-semibold">{problems.length}</span> {problems.length === 1 ? "thing" : "things"} to fix before the
+              line can be rated
             </span>
           )}
           {check.pending && result !== null ? <span className="text-ink-2 text-xs">checking…</span> : null}
         </p>
         {hasList ? (
-          <Button variant="ghost" size="sm" className="min-h-11" aria-expanded={open} aria-controls="live-check-list" onClick={() => setOpen(!open)}>
+          <Button
+            variant="ghost"
+            size="sm"
+            className="min-h-11"
+            aria-expanded={open}
+            aria-controls="live-check-list"
+            onClick={() => setOpen(!open)}
+          >
             {open ? "Hide" : evaluation ? "Show the summary" : "Show what to fix"}
           </Button>
         ) : null}

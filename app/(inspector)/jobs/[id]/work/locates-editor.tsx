@@ -28,8 +28,8 @@ export function LocatesEditor() {
   return (
     <div className="space-y-4">
       <p className="text-ink-2 text-sm">
-        Depths from a locator are approximate. Two or more marks give the grade between them; add the ground elevation only where you measured it (the
-        ground is taken as level otherwise).
+        Depths from a locator are approximate. Two or more marks give the grade between them; add the ground elevation only where you
+        measured it (the ground is taken as level otherwise).
       </p>
       <ol className="space-y-3">
         {fields.map((f, i) => (

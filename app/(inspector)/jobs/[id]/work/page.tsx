@@ -60,7 +60,12 @@ export default async function WorkPage({ params }: { params: Promise<{ id: strin
       {header}
       <Workspace
         job={{ id: job.id, accessNotes: job.accessNotes, cleanoutNote: job.cleanoutKnown ? (job.cleanoutNote ?? "known") : null }}
-        initial={{ record: row?.record ?? {}, narrative: row?.narrative ?? "", recommendation: row?.recommendation ?? "", revision: row?.revision ?? 0 }}
+        initial={{
+          record: row?.record ?? {},
+          narrative: row?.narrative ?? "",
+          recommendation: row?.recommendation ?? "",
+          revision: row?.revision ?? 0,
+        }}
       />
     </>
   );

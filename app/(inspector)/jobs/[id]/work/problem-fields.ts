@@ -172,7 +172,8 @@ export function listProblems(fieldErrors: Record<string, string[]>, form: Worksp
   const order = SECTIONS.map((s) => s.id);
   const items: ListedProblem[] = [];
   for (const [path, messages] of Object.entries(fieldErrors)) {
-    for (const m of messages) items.push({ path, label: fieldLabel(path, form), message: problemMessage(path, m, form), section: sectionOf(path) });
+    for (const m of messages)
+      items.push({ path, label: fieldLabel(path, form), message: problemMessage(path, m, form), section: sectionOf(path) });
   }
   return items
     .map((p, i) => ({ p, i }))

@@ -3,7 +3,15 @@
 import type { ListedProblem } from "./problem-fields";
 
 /** Problems as a list of buttons: each one opens its step and puts the cursor in the field. */
-export function ProblemList({ problems, onGo, className }: { problems: ListedProblem[]; onGo: (path: string) => void; className?: string }) {
+export function ProblemList({
+  problems,
+  onGo,
+  className,
+}: {
+  problems: ListedProblem[];
+  onGo: (path: string) => void;
+  className?: string;
+}) {
   return (
     <ul className={className ?? "space-y-1"}>
       {problems.map((p, i) => (
@@ -17,7 +25,7 @@ export function ProblemList({ problems, onGo, className }: { problems: ListedPro
               ›
             </span>
             <span>
-              <span className="text-ink font-semibold underline decoration-rule-strong underline-offset-2">{p.label}</span>
+              <span className="text-ink decoration-rule-strong font-semibold underline underline-offset-2">{p.label}</span>
               <span className="text-ink-2">: {p.message}</span>
             </span>
           </button>

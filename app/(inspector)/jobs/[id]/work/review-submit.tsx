@@ -51,7 +51,7 @@ export function ReviewSubmit({
 
       <div aria-live="polite" id="review-problems" tabIndex={-1} className="outline-none">
         {problems.length > 0 ? (
-          <div className="border-[#efdcb2] bg-warning-bg rounded-card border px-3 py-3">
+          <div className="bg-warning-bg rounded-card border border-[#efdcb2] px-3 py-3">
             <h3 className="font-sans text-[0.9375rem] font-semibold">
               Before you submit: <span className="num">{problems.length}</span> {problems.length === 1 ? "thing" : "things"} to fix
             </h3>
@@ -69,7 +69,8 @@ export function ReviewSubmit({
       {submitError ? <Alert tone="danger">{submitError}</Alert> : null}
 
       <p className="text-ink-2 text-sm">
-        Submitting delivers the report: the buyer is invited to unlock the rated summary, the agent is told, and the record can no longer change.
+        Submitting delivers the report: the buyer is invited to unlock the rated summary, the agent is told, and the record can no longer
+        change.
       </p>
       <Button size="lg" className="w-full sm:w-auto" onClick={onSubmit} pending={submitting}>
         Submit and deliver

@@ -1,6 +1,6 @@
 "use client";
 
-import type { RefObject } from "react";
+import { useEffect, type RefObject } from "react";
 
 import { Button } from "@/components/ui/button";
 
@@ -42,7 +42,10 @@ export function SaveBar({
   action: { label: string; onClick: () => void; pending?: boolean } | null;
 }) {
   return (
-    <div ref={barRef} className="border-rule fixed inset-x-0 bottom-0 z-40 border-t bg-white/95 shadow-[0_-6px_18px_-14px_rgb(27_36_34/0.5)] backdrop-blur print:hidden">
+    <div
+      ref={barRef}
+      className="border-rule fixed inset-x-0 bottom-0 z-40 border-t bg-white/95 shadow-[0_-6px_18px_-14px_rgb(27_36_34/0.5)] backdrop-blur print:hidden"
+    >
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-3 gap-y-2 px-4 py-2 sm:px-6">
         <p role="status" className="text-ink-2 flex min-h-11 min-w-0 flex-1 items-center gap-2 text-sm" data-save-status={state.kind}>
           <SaveText state={state} everSaved={everSaved} />
@@ -53,7 +56,10 @@ export function SaveBar({
           ) : null}
         </p>
         {state.kind === "conflict" ? (
-          <div role="alert" className="border-[#efdcb2] bg-warning-bg order-first flex w-full flex-wrap items-center gap-3 rounded-md border px-3 py-2 text-sm">
+          <div
+            role="alert"
+            className="bg-warning-bg order-first flex w-full flex-wrap items-center gap-3 rounded-md border border-[#efdcb2] px-3 py-2 text-sm"
+          >
             <span className="min-w-0 flex-1">{state.message}</span>
             <Button size="sm" className="min-h-11" onClick={() => window.location.reload()}>
               Reload
@@ -68,4 +74,21 @@ export function SaveBar({
       </div>
     </div>
   );
+}
+
+/** The bottom bar must never hide the field that has focus (WCAG 2.4.11): scroll padding keeps focus and "go to field" clear of it. */
+export function useScrollPadding(bar: RefObject<HTMLElement | null>) {
+  useEffect(() => {
+    const root = document.documentElement;
+    const update = () => {
+      root.style.scrollPaddingBottom = `${(bar.current?.offsetHeight ?? 0) + 8}px`;
+    };
+    const observer = new ResizeObserver(update);
+    if (bar.current) observer.observe(bar.current);
+    update();
+    return () => {
+      observer.disconnect();
+      root.style.scrollPaddingBottom = "";
+    };
+  }, [bar]);
 }

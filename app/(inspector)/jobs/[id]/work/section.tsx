@@ -39,7 +39,10 @@ export function Section({
   children: ReactNode;
 }) {
   return (
-    <section aria-labelledby={`section-${id}`} className={clsx("rounded-card border bg-white", open ? "border-rule-strong/70" : "border-rule")}>
+    <section
+      aria-labelledby={`section-${id}`}
+      className={clsx("rounded-card border bg-white", open ? "border-rule-strong/70" : "border-rule")}
+    >
       <h2 className="font-sans text-base">
         <button
           type="button"
@@ -62,8 +65,14 @@ export function Section({
             <span className="text-ink block font-semibold">{title}</span>
             {summary ? <span className="text-ink-2 block truncate text-sm font-normal">{summary}</span> : null}
           </span>
-          <span className={clsx("shrink-0 rounded-full border px-2 py-0.5 text-xs font-medium", STATUS_STYLES[status.tone])}>{status.text}</span>
-          <svg viewBox="0 0 16 16" aria-hidden="true" className={clsx("text-ink-2 size-4 shrink-0 transition-transform", open && "rotate-180")}>
+          <span className={clsx("shrink-0 rounded-full border px-2 py-0.5 text-xs font-medium", STATUS_STYLES[status.tone])}>
+            {status.text}
+          </span>
+          <svg
+            viewBox="0 0 16 16"
+            aria-hidden="true"
+            className={clsx("text-ink-2 size-4 shrink-0 transition-transform", open && "rotate-180")}
+          >
             <path d="m4 6 4 4 4-4" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinecap="round" strokeLinejoin="round" />
           </svg>
         </button>

@@ -38,7 +38,9 @@ export function SegmentsEditor() {
 
   return (
     <div className="space-y-4">
-      <p className="text-ink-2 text-sm">Add a segment wherever the material or the diameter changes. The last one ends where the survey ended.</p>
+      <p className="text-ink-2 text-sm">
+        Add a segment wherever the material or the diameter changes. The last one ends where the survey ended.
+      </p>
       {listError ? (
         <p className="text-danger text-sm font-medium" id={fieldId("segments")} tabIndex={-1}>
           {listError}
@@ -56,7 +58,15 @@ export function SegmentsEditor() {
                     from <span className="num">{i === 0 ? "0.0" : ft(segments[i - 1]?.to ?? "")} ft</span>
                   </span>
                 </h3>
-                <Button variant="ghost" className="min-h-11" onClick={() => { remove(i); addRef.current?.focus(); }} aria-label={`Remove segment ${i + 1}`}>
+                <Button
+                  variant="ghost"
+                  className="min-h-11"
+                  onClick={() => {
+                    remove(i);
+                    addRef.current?.focus();
+                  }}
+                  aria-label={`Remove segment ${i + 1}`}
+                >
                   Remove
                 </Button>
               </div>

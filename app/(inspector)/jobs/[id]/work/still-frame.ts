@@ -20,7 +20,11 @@ export async function captureFrame(video: HTMLVideoElement, maxWidth = 1280): Pr
 }
 
 async function postJson<T>(url: string, body?: unknown): Promise<T> {
-  const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  const res = await fetch(url, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
   const data: unknown = await res.json().catch(() => null);
   if (!res.ok) throw new Error((data as { error?: { message?: string } } | null)?.error?.message ?? "The still frame could not be stored.");
   return data as T;
@@ -38,4 +42,41 @@ export async function uploadStill(jobId: string, still: Blob, clipId: string, se
   if (!put.ok) throw new Error("The still frame could not be uploaded.");
   await postJson(`/api/stills/${stillId}/complete`);
   return stillId;
+}
+
+function once(target: HTMLVideoElement, event: string, ms: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const timer = setTimeout(() => resolve(false), ms);
+    target.addEventListener(
+      event,
+      () => {
+        clearTimeout(timer);
+        resolve(true);
+      },
+      { once: true },
+    );
+    target.addEventListener("error", () => resolve(false), { once: true });
+  });
+}
+
+/**
+ * The frame at a second of a clip, read through a separate CORS-enabled video element so the
+ * canvas is not tainted (the player on screen does not ask storage for CORS).
+ */
+export async function frameAt(url: string, second: number): Promise<Blob | null> {
+  const v = document.createElement("video");
+  v.crossOrigin = "anonymous";
+  v.muted = true;
+  v.playsInline = true;
+  v.preload = "auto";
+  v.src = url;
+  try {
+    if (!(await once(v, "loadeddata", 8000))) return null;
+    v.currentTime = second;
+    if (!(await once(v, "seeked", 8000))) return null;
+    return await captureFrame(v);
+  } finally {
+    v.removeAttribute("src");
+    v.load();
+  }
 }

@@ -16,7 +16,13 @@ const REASONS: { value: SurveyEndReason; label: string; hint?: string }[] = [
 export function SurveyEndEditor() {
   return (
     <div className="space-y-4">
-      <NumberField name="surveyEnd.at" label="Survey ended at" unit="ft" hint="Counter footage from the access point." className="max-w-64" />
+      <NumberField
+        name="surveyEnd.at"
+        label="Survey ended at"
+        unit="ft"
+        hint="Counter footage from the access point."
+        className="max-w-64"
+      />
       <ChoiceField<SurveyEndReason> name="surveyEnd.reason" legend="Why it ended" options={REASONS} />
     </div>
   );

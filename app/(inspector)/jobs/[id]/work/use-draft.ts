@@ -19,7 +19,17 @@ type Pending = { payload: DraftPayload; key: string };
  * Autosave for the job's draft: one save in flight at a time, each based on the revision the last
  * one returned, so two tabs never overwrite each other silently (the server answers 409).
  */
-export function useDraft({ jobId, initialRevision, initialKey, delayMs = 1500 }: { jobId: string; initialRevision: number; initialKey: string; delayMs?: number }) {
+export function useDraft({
+  jobId,
+  initialRevision,
+  initialKey,
+  delayMs = 1500,
+}: {
+  jobId: string;
+  initialRevision: number;
+  initialKey: string;
+  delayMs?: number;
+}) {
   const [state, setState] = useState<SaveState>({ kind: "clean", at: null });
   const revision = useRef(initialRevision);
   const savedKey = useRef(initialKey);

@@ -5,9 +5,7 @@ import { useEffect, useRef, useState } from "react";
 import type { Evaluation } from "@/lib/engine/evaluate";
 
 export type CheckResult =
-  | { kind: "ok"; evaluation: Evaluation }
-  | { kind: "problems"; fieldErrors: Record<string, string[]> }
-  | { kind: "error"; message: string };
+  { kind: "ok"; evaluation: Evaluation } | { kind: "problems"; fieldErrors: Record<string, string[]> } | { kind: "error"; message: string };
 
 /** The latest answer of the engine, kept on screen while the next one is on its way. */
 export type LiveCheck = { pending: boolean; result: CheckResult | null };

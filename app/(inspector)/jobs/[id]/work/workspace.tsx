@@ -1,14 +1,12 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode, type RefObject } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
 import { FormProvider, useForm, useWatch } from "react-hook-form";
 
 import { LineDiagramInteractive } from "@/components/line-diagram-interactive";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { FINDING_TYPES } from "@/lib/engine/finding-types";
-import { SURVEY_END_LABELS } from "@/lib/engine/vocabulary";
 
 import { AccessEditor } from "./access-editor";
 import { BoundaryEditor } from "./boundary-editor";
@@ -18,10 +16,11 @@ import { FindingsEditor, proposalKey, type FootageProposal } from "./findings-ed
 import { LiveCheckPanel } from "./live-check-panel";
 import { LocatesEditor } from "./locates-editor";
 import { NarrativeEditor } from "./narrative-editor";
-import { focusTargets, listProblems, problemMessage, SECTIONS, sectionOf, valueAt, type SectionId } from "./problem-fields";
+import { focusTargets, listProblems, problemMessage, sectionOf, SECTIONS, valueAt, type SectionId } from "./problem-fields";
 import { ReviewSubmit } from "./review-submit";
-import { SaveBar } from "./save-bar";
+import { SaveBar, useScrollPadding } from "./save-bar";
 import { Section, type SectionStatus } from "./section";
+import { firstOpen, sectionStatus, sectionSummary } from "./section-state";
 import { SegmentsEditor } from "./segments-editor";
 import { uploadStill } from "./still-frame";
 import { SurveyEndEditor } from "./survey-end-editor";
@@ -37,7 +36,8 @@ type Errors = Record<string, string[]>;
 
 function merge(...maps: Errors[]): Errors {
   const out: Errors = {};
-  for (const m of maps) for (const [k, v] of Object.entries(m)) out[k] = [...(out[k] ?? []), ...v.filter((x) => !(out[k] ?? []).includes(x))];
+  for (const m of maps)
+    for (const [k, v] of Object.entries(m)) out[k] = [...(out[k] ?? []), ...v.filter((x) => !(out[k] ?? []).includes(x))];
   return out;
 }
 
@@ -57,7 +57,10 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
   const draft = useDraft({ jobId: job.id, initialRevision: initial.revision, initialKey });
   const { schedule } = draft;
   useEffect(() => {
-    schedule({ record: JSON.parse(recordJson) as Record<string, unknown>, narrative: values.narrative, recommendation: values.recommendation }, payloadKey);
+    schedule(
+      { record: JSON.parse(recordJson) as Record<string, unknown>, narrative: values.narrative, recommendation: values.recommendation },
+      payloadKey,
+    );
   }, [schedule, payloadKey, recordJson, values.narrative, values.recommendation]);
 
   const check = useEvaluation(recordJson);
@@ -132,7 +135,8 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
     const finding = { ...emptyFinding(), at: m.footage.toFixed(1), clipId: m.clip.id, second };
     const index = methods.getValues("findings").length;
     methods.setValue("findings", [...methods.getValues("findings"), finding], { shouldDirty: true });
-    const start = m.clip.startFootage !== null ? `${m.clip.startFootage.toFixed(1)} ft at the clip's start` : "0 ft (the clip has no start footage)";
+    const start =
+      m.clip.startFootage !== null ? `${m.clip.startFootage.toFixed(1)} ft at the clip's start` : "0 ft (the clip has no start footage)";
     const stillText = m.still ? "A still frame is being attached." : "No still frame: the browser could not take one from this clip.";
     setProposals((p) =>
       new Map(p).set(proposalKey(m.clip.id, second), {
@@ -144,7 +148,10 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
     if (!m.still) return;
     uploadStill(job.id, m.still, m.clip.id, m.second)
       .then((stillId) => {
-        const i = methods.getValues("findings").findIndex((f) => f.clipId === m.clip.id && f.second === second);
+        // The finding may have moved if others were removed meanwhile; never attach to one that has a still.
+        const list = methods.getValues("findings");
+        const same = (f: (typeof list)[number] | undefined) => f?.clipId === m.clip.id && f.second === second && !f.stillId;
+        const i = same(list[index]) ? index : list.findLastIndex(same);
         if (i >= 0) methods.setValue(`findings.${i}.stillId`, stillId, { shouldDirty: true });
       })
       .catch(() => setNotice("The still frame could not be stored. The finding keeps the clip and the second."));
@@ -163,7 +170,9 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
     const saved = await draft.flush();
     if (!saved) {
       setSubmitting(false);
-      setSubmitError(draft.state.kind === "conflict" ? CONFLICT_MESSAGE : "The latest changes are not saved yet, so nothing was submitted. Try again.");
+      setSubmitError(
+        draft.state.kind === "conflict" ? CONFLICT_MESSAGE : "The latest changes are not saved yet, so nothing was submitted. Try again.",
+      );
       return;
     }
     try {
@@ -269,13 +278,17 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
   return (
     <FormProvider {...methods}>
       <WorkspaceContext.Provider value={context}>
-        <form onSubmit={(e) => e.preventDefault()} noValidate className="grid gap-4 pb-32 lg:grid-cols-[minmax(0,1fr)_29rem] lg:items-start">
-          <aside aria-label="Line diagram and live check" className="lg:sticky lg:top-4 lg:order-2 lg:max-h-[calc(100dvh-6.5rem)] lg:overflow-y-auto">
-            <Card className="px-4 pt-3 pb-2">
-              <div className="flex items-baseline justify-between gap-3">
-                <h2 className="text-ink-2 font-sans text-sm font-semibold tracking-[0.08em] uppercase">Line diagram</h2>
-                {values.surveyEnd.reason ? <p className="text-ink-2 truncate text-xs">Survey: {SURVEY_END_LABELS[values.surveyEnd.reason]}</p> : null}
-              </div>
+        <form
+          onSubmit={(e) => e.preventDefault()}
+          noValidate
+          className="grid grid-cols-[minmax(0,1fr)] gap-4 pb-32 lg:grid-cols-[minmax(0,1fr)_31rem] lg:items-start"
+        >
+          <aside
+            aria-label="Line diagram and live check"
+            className="min-w-0 lg:sticky lg:top-4 lg:order-2 lg:max-h-[calc(100dvh-6.5rem)] lg:overflow-y-auto"
+          >
+            <Card className="px-4 pt-3 pb-2 max-sm:-mx-4 max-sm:rounded-none max-sm:border-x-0">
+              <h2 className="text-ink-2 font-sans text-sm font-semibold tracking-[0.08em] uppercase">Line diagram</h2>
               <LineDiagramInteractive
                 compact
                 record={record}
@@ -321,89 +334,13 @@ export function Workspace({ job, initial }: { job: WorkspaceJob; initial: Worksp
           state={draft.state}
           everSaved={initial.revision > 0}
           onRetry={() => void draft.retry()}
-          action={open.has("review") && open.size === 1 ? { label: "Submit and deliver", onClick: submit, pending: submitting } : { label: "Review and submit", onClick: () => openOnly("review") }}
+          action={
+            open.has("review") && open.size === 1
+              ? { label: "Submit and deliver", onClick: submit, pending: submitting }
+              : { label: "Review and submit", onClick: () => openOnly("review") }
+          }
         />
       </WorkspaceContext.Provider>
     </FormProvider>
   );
-}
-
-/** The bottom bar must never hide the field that has focus (WCAG 2.4.11): scroll padding keeps focus and "go to field" clear of it. */
-function useScrollPadding(bar: RefObject<HTMLElement | null>) {
-  useEffect(() => {
-    const root = document.documentElement;
-    const update = () => {
-      root.style.scrollPaddingBottom = `${(bar.current?.offsetHeight ?? 0) + 8}px`;
-    };
-    const observer = new ResizeObserver(update);
-    if (bar.current) observer.observe(bar.current);
-    update();
-    return () => {
-      observer.disconnect();
-      root.style.scrollPaddingBottom = "";
-    };
-  }, [bar]);
-}
-
-function firstOpen(form: WorkspaceForm): SectionId {
-  if (!form.access.kind) return "access";
-  if (!form.surveyEnd.at || form.segments.length === 0) return "profile";
-  return "findings";
-}
-
-function sectionStatus(id: SectionId, form: WorkspaceForm, errors: Errors, shown: (path: string) => boolean, readyClips: number): SectionStatus {
-  const count = Object.entries(errors)
-    .filter(([path]) => sectionOf(path) === id && shown(path))
-    .reduce((n, [, list]) => n + list.length, 0);
-  if (id !== "review" && count > 0) return { tone: "fix", text: `${count} to fix` };
-  switch (id) {
-    case "clips":
-      return readyClips > 0 ? { tone: "done", text: "Done" } : { tone: "todo", text: "To do" };
-    case "access":
-      return form.access.kind ? { tone: "done", text: "Done" } : { tone: "todo", text: "To do" };
-    case "profile": {
-      const filled = form.surveyEnd.at !== "" && form.surveyEnd.reason !== "" && form.segments.length > 0;
-      return filled ? { tone: "done", text: "Done" } : { tone: "todo", text: "To do" };
-    }
-    case "locates":
-      return form.locates.length > 0 ? { tone: "done", text: "Done" } : { tone: "optional", text: "Optional" };
-    case "boundary":
-      return { tone: "done", text: "Done" };
-    case "findings":
-      return form.findings.length > 0 ? { tone: "done", text: "Done" } : { tone: "optional", text: "None yet" };
-    case "narrative":
-      return form.narrative.trim().length >= 20 ? { tone: "done", text: "Done" } : { tone: "todo", text: "To do" };
-    case "review": {
-      const total = Object.values(errors).reduce((n, l) => n + l.length, 0);
-      return total > 0 ? { tone: "todo", text: `${total} to fix` } : { tone: "done", text: "Ready" };
-    }
-  }
-}
-
-function sectionSummary(id: SectionId, form: WorkspaceForm, readyClips: number): string | undefined {
-  const n = (count: number, one: string, many: string) => `${count} ${count === 1 ? one : many}`;
-  switch (id) {
-    case "clips":
-      return readyClips > 0 ? n(readyClips, "ready clip", "ready clips") : "Upload and watch the runs";
-    case "access":
-      return form.access.note.trim() || "How the camera went in";
-    case "profile": {
-      const end = parseNumber(form.surveyEnd.at);
-      return `${n(form.segments.length, "segment", "segments")}${end !== undefined ? ` · survey ended at ${end.toFixed(1)} ft` : ""}`;
-    }
-    case "locates":
-      return form.locates.length > 0 ? n(form.locates.length, "mark", "marks") : "Depths read with the sonde";
-    case "boundary": {
-      const at = parseNumber(form.boundary.at);
-      return form.boundary.known === "yes" && at !== undefined ? `Public side begins at ${at.toFixed(1)} ft` : "Unknown";
-    }
-    case "findings": {
-      const types = [...new Set(form.findings.flatMap((f) => (f.type ? [FINDING_TYPES[f.type].label as string] : [])))];
-      return form.findings.length > 0 ? `${n(form.findings.length, "finding", "findings")}${types.length ? ` · ${types.slice(0, 3).join(", ")}` : ""}` : "Defects by footage";
-    }
-    case "narrative":
-      return form.narrative.trim() ? `${form.narrative.trim().slice(0, 60)}${form.narrative.trim().length > 60 ? "…" : ""}` : "Your summary and recommendation";
-    case "review":
-      return "Check and deliver";
-  }
 }
