@@ -1,6 +1,6 @@
 import "server-only";
 
-import { and, eq, inArray, isNull, sql } from "drizzle-orm";
+import { and, eq, inArray, sql } from "drizzle-orm";
 
 import { AppError } from "@/lib/errors";
 import { formatAddress } from "@/lib/format";
@@ -10,7 +10,7 @@ import { quoteScope } from "@/lib/pricing";
 import type { CreateOrderInput } from "@/lib/validations/orders";
 
 import { getDb, type Tx } from "../client";
-import { appointmentProposals, listings, orderEvents, orders, type OrderStatus, users } from "../schema";
+import { listings, orderEvents, orders, type OrderStatus, users } from "../schema";
 import { isPostalCodeServed } from "./inspectors";
 import { selectOrders, toOrderDto } from "./order-dto";
 import { currentPrices } from "./prices";

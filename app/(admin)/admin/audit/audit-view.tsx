@@ -146,8 +146,7 @@ export function AuditView({ log, filters, fieldErrors }: { log: AuditPage; filte
           {
             key: "target",
             header: "Target",
-            cell: (e) =>
-              e.target ? <span className="num text-sm break-all">{`${e.target.type} ${e.target.id?.slice(0, 8) ?? ""}`}</span> : "—",
+            cell: (e) => (e.target ? <Target entry={e} /> : "—"),
           },
           { key: "from", header: "From", cell: (e) => <span className="num text-sm">{e.ip ?? "—"}</span> },
           {
@@ -196,5 +195,18 @@ export function AuditView({ log, filters, fieldErrors }: { log: AuditPage; filte
         </nav>
       ) : null}
     </div>
+  );
+}
+
+/** A user target reads as their e-mail when the entry recorded it; other targets as type and short id. */
+function Target({ entry }: { entry: AuditEntryDto }) {
+  const email = typeof entry.data.email === "string" ? entry.data.email : null;
+  return (
+    <span className="flex flex-col text-sm">
+      {email && entry.target?.type === "user" ? <span className="break-all">{email}</span> : null}
+      <span className="num text-ink-2 break-all" title={entry.target?.id ?? undefined}>
+        {entry.target?.type} {entry.target?.id?.slice(0, 8)}
+      </span>
+    </span>
   );
 }

@@ -7,7 +7,7 @@ import { Countdown, useNow } from "@/components/countdown";
 import { OrderTimeline } from "@/components/order-timeline";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
-import { Button } from "@/components/ui/button";
+import { Button, ButtonLink } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Input } from "@/components/ui/input";
 import { Money } from "@/components/ui/money";
@@ -127,6 +127,15 @@ export function JobDetail({ initial, inspectorId, labels }: { initial: JobDetail
                 <Button onClick={accept} pending={accepting}>
                   Accept job
                 </Button>
+              </CardBody>
+            </Card>
+          ) : null}
+
+          {mine && (job.status === "accepted" || job.status === "scheduled") ? (
+            <Card>
+              <CardHeader title="Record the line" description="Upload clips, record the line profile and findings, and deliver the report." />
+              <CardBody>
+                <ButtonLink href={`/jobs/${job.id}/work`}>Open the job workspace</ButtonLink>
               </CardBody>
             </Card>
           ) : null}
