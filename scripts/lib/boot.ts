@@ -11,6 +11,7 @@ import { startOutboxWorker } from "@/lib/mail/outbox-worker";
 import { startAtRiskSweeper } from "@/lib/orders/at-risk-sweep";
 import { startPayoutWorker } from "@/lib/payments/payouts";
 import { startUploadSweeper } from "@/lib/uploads/sweeper";
+import { startLicenceSweeper } from "@/lib/admin/licence-sweep";
 import { ensureBucket } from "@/lib/storage/client";
 import { startMailCatcher } from "@/services/mail-catcher";
 import { startPaymentsStandin } from "@/services/payments-standin";
@@ -62,6 +63,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   const stopAtRisk = startAtRiskSweeper();
   const stopPayouts = startPayoutWorker();
   const stopUploads = startUploadSweeper();
+  const stopLicences = startLicenceSweeper(60 * 60_000);
 
   const app = next({ dev: opts.dev, hostname: e.HOST, port: e.PORT, dir: process.cwd() });
   const handle = app.getRequestHandler();
@@ -84,6 +86,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
     stopAtRisk();
     stopPayouts();
     stopUploads();
+    stopLicences();
     const force = setTimeout(() => server.closeAllConnections(), 10_000);
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
