@@ -10,7 +10,7 @@ const run = (cmd: string, args: string[]) => spawnSync(cmd, args, { stdio: "inhe
 function newestSource(dir: string): number {
   let newest = 0;
   for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    if (["node_modules", ".next", ".data", ".git", "tests", "bench"].includes(entry.name)) continue;
+    if (["node_modules", ".next", ".data", ".git", "tests", "bench", "next-env.d.ts"].includes(entry.name) || entry.name.endsWith(".tsbuildinfo")) continue;
     const full = path.join(dir, entry.name);
     newest = Math.max(newest, entry.isDirectory() ? newestSource(full) : fs.statSync(full).mtimeMs);
   }
