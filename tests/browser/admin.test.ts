@@ -112,6 +112,8 @@ describe("the admin in the browser", () => {
     await signInThroughForm(page, "admin@gradeline.test");
     await page.goto(appUrl("/admin/prices"));
     const base = page.getByLabel("Base price ($)");
+    // While the page hydrates, the server-rendered form and the client one can both be in the DOM for a moment.
+    await expect.poll(() => base.count(), { timeout: 15_000 }).toBe(1);
     const before = await base.inputValue();
 
     await base.fill("-5");
