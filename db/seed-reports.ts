@@ -89,7 +89,13 @@ export async function seedDemoReports(): Promise<void> {
         await tx.insert(ledgerEntries).values([
           { orderId: order.id, paymentId: payment.id, kind: "charge", amountCents: order.priceCents, externalId: payment.checkoutSessionId },
           { orderId: order.id, paymentId: payment.id, kind: "fee", amountCents: order.platformFeeCents, externalId: `fee-${payment.checkoutSessionId}` },
-          ...(refunded ? [{ orderId: order.id, paymentId: payment.id, kind: "refund" as const, amountCents: order.priceCents, externalId: `re_demo_${order.id.slice(0, 8)}` }] : []),
+          ...(refunded
+            ? [
+                { orderId: order.id, paymentId: payment.id, kind: "refund" as const, amountCents: order.priceCents, externalId: `re_demo_${order.id.slice(0, 8)}` },
+                // The payout was never sent, so the whole refund beyond the inspector's share comes out of the fee.
+                { orderId: order.id, paymentId: payment.id, kind: "fee" as const, amountCents: -order.platformFeeCents, externalId: `fee-re_demo_${order.id.slice(0, 8)}` },
+              ]
+            : []),
         ]);
         await tx.insert(payouts).values({ paymentId: payment.id, inspectorId: order.inspectorId!, amountCents: order.priceCents - order.platformFeeCents, status: refunded ? "reversed" : "waiting", reversedCents: refunded ? order.priceCents - order.platformFeeCents : 0 });
       });

@@ -40,5 +40,7 @@ describe("the demo reports", () => {
     }
     const unlocked = delivered.find((o) => o.status === "unlocked")!;
     expect(await db.select().from(reportAccess).where(eq(reportAccess.orderId, unlocked.id))).toHaveLength(1);
+    const { ledgerBalance } = await import("@/db/queries/payouts");
+    expect((await ledgerBalance()).balanced).toBe(true);
   });
 });
