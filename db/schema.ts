@@ -27,7 +27,8 @@ export const orderStatusEnum = pgEnum("order_status", [
   "refunded",
 ]);
 export const mailStatusEnum = pgEnum("mail_status", ["pending", "sent", "failed"]);
-export const clipStatusEnum = pgEnum("clip_status", ["uploading", "ready", "rejected", "aborted"]);
+/** aborted: an upload cancelled or swept before it finished; removed: a ready clip the inspector took out of the job. */
+export const clipStatusEnum = pgEnum("clip_status", ["uploading", "ready", "rejected", "aborted", "removed"]);
 export const disputeStatusEnum = pgEnum("dispute_status", ["open", "closed"]);
 export const paymentStatusEnum = pgEnum("payment_status", ["pending", "paid", "expired", "refunded", "partially_refunded"]);
 export const payoutStatusEnum = pgEnum("payout_status", ["waiting", "sent", "reversed", "partially_reversed"]);
@@ -242,6 +243,8 @@ export const stills = pgTable(
     second: doublePrecision("second"),
     objectKey: text("object_key").notNull().unique(),
     createdAt: createdAt(),
+    /** Set once the stored bytes were read and found to be a JPEG or PNG; only verified stills reach a report. */
+    verifiedAt: timestamp("verified_at", { withTimezone: true }),
   },
   (t) => [index("stills_order_idx").on(t.orderId)],
 );

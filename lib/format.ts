@@ -10,6 +10,11 @@ export function formatDate(date: Date | string, timeZone = "UTC"): string {
   return new Intl.DateTimeFormat("en-US", { timeZone, month: "short", day: "numeric", year: "numeric" }).format(new Date(date));
 }
 
+/** The calendar day a moment falls on in a time zone, as an ISO date: "2026-11-30". */
+export function localIsoDate(date: Date | string, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(date));
+}
+
 /** "in 3 d 4 h", "in 5 h", "2 h ago": for deadlines. */
 export function formatCountdown(target: Date | string, now = new Date()): string {
   const ms = new Date(target).getTime() - now.getTime();

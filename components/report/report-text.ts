@@ -29,11 +29,12 @@ export function clipTime(second: number): string {
 export const rangeText = (r: { lowCents: number; highCents: number }): string =>
   `${formatMoney(r.lowCents, { whole: true })}–${formatMoney(r.highCents, { whole: true })}`;
 
-/** Dates arrive as ISO dates or timestamps; the visit's own day is what matters, so read them in UTC. */
-export function dateText(value: string | null | undefined): string | null {
+/** An ISO date is a calendar day and reads as itself; a timestamp reads on its day in `timeZone` (the listing's). */
+export function dateText(value: string | null | undefined, timeZone = "UTC"): string | null {
   if (!value) return null;
-  const d = new Date(/^\d{4}-\d{2}-\d{2}$/.test(value) ? `${value}T12:00:00Z` : value);
-  return Number.isNaN(d.getTime()) ? null : formatDate(d, "UTC");
+  const dayOnly = /^\d{4}-\d{2}-\d{2}$/.test(value);
+  const d = new Date(dayOnly ? `${value}T12:00:00Z` : value);
+  return Number.isNaN(d.getTime()) ? null : formatDate(d, dayOnly ? "UTC" : timeZone);
 }
 
 export function observedLine(s: Pick<ReportSummary, "observedOn" | "visitedOn">): string {

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { and, asc, eq, inArray, lt, ne } from "drizzle-orm";
+import { and, asc, eq, inArray, isNotNull, isNull, lt, notInArray } from "drizzle-orm";
 
 import { getDb } from "../client";
 import { clips, orders, stills, type Clip, type OrderStatus } from "../schema";
@@ -49,7 +49,7 @@ export async function listClipsForOrder(orderId: string) {
   return db
     .select()
     .from(clips)
-    .where(and(eq(clips.orderId, orderId), ne(clips.status, "aborted")))
+    .where(and(eq(clips.orderId, orderId), notInArray(clips.status, ["aborted", "removed"])))
     .orderBy(asc(clips.createdAt));
 }
 
@@ -97,10 +97,19 @@ export async function finishClip(
 }
 
 export async function markClipAborted(clipId: string, from: readonly ClipStatus[], olderThan?: Date) {
+  return markClipGone(clipId, "aborted", from, olderThan);
+}
+
+/** A ready clip the inspector took out of the job: kept as a row (findings may name it), its object deleted. */
+export async function markClipRemoved(clipId: string) {
+  return markClipGone(clipId, "removed", ["ready"]);
+}
+
+async function markClipGone(clipId: string, status: "aborted" | "removed", from: readonly ClipStatus[], olderThan?: Date) {
   const db = await getDb();
   const [row] = await db
     .update(clips)
-    .set({ status: "aborted", updatedAt: new Date() })
+    .set({ status, updatedAt: new Date() })
     .where(and(eq(clips.id, clipId), inArray(clips.status, [...from]), olderThan ? lt(clips.updatedAt, olderThan) : undefined))
     .returning();
   return row ?? null;
@@ -156,14 +165,26 @@ export async function getStillForInspector(stillId: string, inspectorId: string)
   return row ?? null;
 }
 
-export async function deleteStill(stillId: string) {
+export async function markStillVerified(stillId: string) {
   const db = await getDb();
-  await db.delete(stills).where(eq(stills.id, stillId));
+  await db.update(stills).set({ verifiedAt: new Date() }).where(and(eq(stills.id, stillId), isNull(stills.verifiedAt)));
+}
+
+/** Ids of this job's stills whose bytes were checked: the only ones a finding may point at. */
+export async function verifiedStillIds(orderId: string): Promise<string[]> {
+  const db = await getDb();
+  const rows = await db.select({ id: stills.id }).from(stills).where(and(eq(stills.orderId, orderId), isNotNull(stills.verifiedAt)));
+  return rows.map((r) => r.id);
 }
 
 export async function listStillsForOrder(orderId: string) {
   const db = await getDb();
   return db.select().from(stills).where(eq(stills.orderId, orderId)).orderBy(asc(stills.createdAt));
+}
+
+export async function deleteStill(stillId: string) {
+  const db = await getDb();
+  await db.delete(stills).where(eq(stills.id, stillId));
 }
 
 export type ClipView = {

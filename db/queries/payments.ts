@@ -21,3 +21,14 @@ export async function latestPaymentFor(orderId: string, buyerId: string) {
   const [row] = await db.select().from(payments).where(and(eq(payments.orderId, orderId), eq(payments.buyerId, buyerId))).orderBy(desc(payments.createdAt)).limit(1);
   return row ?? null;
 }
+
+/** True while this buyer's checkout `sessionId` was paid within the last `withinMs`: the return page's "payment received" note. */
+export async function paidRecently(orderId: string, buyerId: string, sessionId: string, withinMs = 30 * 60_000, now = new Date()) {
+  const db = await getDb();
+  const [row] = await db
+    .select({ paidAt: payments.paidAt })
+    .from(payments)
+    .where(and(eq(payments.orderId, orderId), eq(payments.buyerId, buyerId), eq(payments.checkoutSessionId, sessionId), eq(payments.status, "paid")))
+    .limit(1);
+  return !!row?.paidAt && now.getTime() - row.paidAt.getTime() <= withinMs;
+}

@@ -2,10 +2,11 @@ import "server-only";
 
 import { createHash } from "node:crypto";
 
-import { and, count, desc, eq, gt, inArray, isNull, or } from "drizzle-orm";
+import { and, count, desc, eq, gt, inArray, isNotNull, isNull, or } from "drizzle-orm";
 
 import type { Role } from "@/db/schema";
 import type { Evaluation } from "@/lib/engine";
+import { localIsoDate } from "@/lib/format";
 import { UNLOCK_INCLUDES, type ReportPreview, type ReportRecord, type ReportSummary, type ReportView } from "@/lib/reports/dto";
 import { signedDownloadUrl } from "@/lib/storage/client";
 
@@ -77,13 +78,15 @@ async function preview(r: ReportOrder, viewerId: string | null): Promise<ReportP
       ? db.select({ status: payments.status, createdAt: payments.createdAt }).from(payments).where(and(eq(payments.orderId, r.order.id), eq(payments.buyerId, viewerId))).orderBy(desc(payments.createdAt)).limit(1)
       : Promise.resolve([]),
   ]);
+  const visitDay = r.order.appointmentStart ?? r.order.deliveredAt;
   const surveyed = (inspection?.evaluation as { lengths?: { surveyed?: number } } | null)?.lengths?.surveyed;
   return {
     id: r.order.id,
     locked: true,
     address: { street: r.listing.street, unit: r.listing.unit, city: r.listing.city, state: r.listing.state, postalCode: r.listing.postalCode },
-    visitedOn: (r.order.appointmentStart ?? r.order.deliveredAt)?.toISOString() ?? null,
+    visitedOn: visitDay ? localIsoDate(visitDay, r.order.timeZone) : null,
     deliveredAt: r.order.deliveredAt?.toISOString() ?? null,
+    timeZone: r.order.timeZone,
     inspector: r.inspectorName ? { name: r.inspectorName, company: r.inspectorCompany, licenceNumber: r.licenceNumber } : null,
     clipCount: Number(clipCount?.n ?? 0),
     surveyedFt: typeof surveyed === "number" ? surveyed : null,
@@ -100,7 +103,7 @@ async function summary(r: ReportOrder, viewerId: string | null): Promise<ReportS
   const [base, clipRows, stillRows] = await Promise.all([
     preview(r, viewerId),
     db.select().from(clips).where(and(eq(clips.orderId, sourceOf(r)), eq(clips.status, "ready"))).orderBy(clips.createdAt),
-    db.select().from(stills).where(eq(stills.orderId, sourceOf(r))),
+    db.select().from(stills).where(and(eq(stills.orderId, sourceOf(r)), isNotNull(stills.verifiedAt))),
   ]);
   const reportClips = await Promise.all(
     clipRows.map(async (c) => ({

@@ -10,6 +10,7 @@ import { getDb } from "../client";
 import { inspections, listings, orderEvents, orders, users } from "../schema";
 import { enqueueMail } from "./outbox";
 import { currentPrices } from "./prices";
+import { reportInvitationPath } from "./users";
 
 export type FreshReport = { orderId: string; visitedOn: string; inspectorName: string | null; priceCents: number };
 
@@ -88,7 +89,7 @@ export async function createReuseOrder(agent: { id: string; name: string }, inpu
           heading: "A recent sewer scope report of this house is available",
           paragraphs: [`${agent.name} ordered the existing sewer scope report of ${source.listing.street}, ${source.listing.city} for you. Unlock it for ${formatMoney(prices.reuseCents)} instead of waiting for a new visit.`],
           facts: [["Inspected on", fresh.visitedOn.slice(0, 10)]],
-          action: { label: "Open my report", path: `/sign-up?role=buyer&email=${encodeURIComponent(input.buyer.email)}` },
+          action: { label: "Open my report", path: await reportInvitationPath(tx, input.buyer.email, order.id) },
         }),
       },
       tx,

@@ -8,10 +8,12 @@ import { renderMail } from "@/lib/mail/render";
 
 import { getDb } from "../client";
 import { listings, orders, users } from "../schema";
+import { verifiedStillIds } from "./clips";
 import { getInspection, markSubmitted, readyClipIds } from "./inspections";
 import { transition } from "./order-commands";
 import { enqueueMail } from "./outbox";
 import { currentRates } from "./rates";
+import { reportInvitationPath } from "./users";
 
 type Problems = Record<string, string[]>;
 
@@ -21,12 +23,14 @@ export async function submissionProblems(orderId: string, baseRevision: number) 
   const problems: Problems = {};
   if (!inspection) return { problems: { record: ["Nothing is recorded yet."] }, evaluation: null, inspection: null, rates: null };
   if (inspection.revision !== baseRevision) throw new AppError("conflict", "This job was changed in another tab or device. Reload to see the latest before submitting.");
-  const ready = await readyClipIds(orderId);
+  const [ready, stillIds] = await Promise.all([readyClipIds(orderId), verifiedStillIds(orderId)]);
   if (ready.length === 0) problems.clips = ["Upload at least one ready clip of the line."];
   if (inspection.narrative.trim().length < 20) problems.narrative = ["Write your summary and recommendation for the buyer (a few sentences)."];
-  const findings = Array.isArray(inspection.record.findings) ? (inspection.record.findings as { clipId?: unknown }[]) : [];
+  const findings = Array.isArray(inspection.record.findings) ? (inspection.record.findings as { clipId?: unknown; stillId?: unknown }[]) : [];
   findings.forEach((f, i) => {
     if (typeof f.clipId === "string" && !ready.includes(f.clipId)) (problems[`findings[${i}].clipId`] ??= []).push("This finding points at a clip that is not ready.");
+    if (typeof f.stillId === "string" && !stillIds.includes(f.stillId))
+      (problems[`findings[${i}].stillId`] ??= []).push("This finding's still frame did not finish uploading. Take it again or remove it.");
   });
   const rates = await currentRates();
   const result = tryEvaluate(inspection.record, { rates: rates.table });
@@ -64,7 +68,7 @@ async function deliveryMail(
   evaluation: Evaluation,
 ) {
   const address = `${listing.street}, ${listing.city}`;
-  const signUp = `/sign-up?role=buyer&email=${encodeURIComponent(order.buyerEmail)}`;
+  const invitation = await reportInvitationPath(tx, order.buyerEmail, order.id);
   await enqueueMail(
     {
       key: `order:${order.id}:delivered:buyer`,
@@ -77,7 +81,7 @@ async function deliveryMail(
           `Sign in (or create your account with this e-mail address) to see what the report covers, then unlock the rated summary: how serious the line's condition is, where the problems are, which repairs fit and roughly what they cost.`,
         ],
         facts: [["Surveyed", `${evaluation.lengths.surveyed.toFixed(1)} ft of line`]],
-        action: { label: "Open my report", path: signUp },
+        action: { label: "Open my report", path: invitation },
       }),
     },
     tx,

@@ -2,7 +2,9 @@ import "server-only";
 
 import { and, eq, gt, isNull, sql } from "drizzle-orm";
 
-import { getDb } from "../client";
+import { authLink } from "@/lib/auth/next-path";
+
+import { getDb, type Db, type Tx } from "../client";
 import { authSessions, type Role, users } from "../schema";
 
 export const normalizeEmail = (email: string) => email.trim().toLowerCase();
@@ -11,6 +13,14 @@ export async function findUserByEmail(email: string) {
   const db = await getDb();
   const [row] = await db.select().from(users).where(eq(users.email, normalizeEmail(email))).limit(1);
   return row ?? null;
+}
+
+/** The invitation e-mail's link: sign in if this address has an account, else sign up as a buyer; either way on to the report. */
+export async function reportInvitationPath(executor: Db | Tx, email: string, orderId: string): Promise<string> {
+  const address = normalizeEmail(email);
+  const [existing] = await executor.select({ id: users.id }).from(users).where(eq(users.email, address)).limit(1);
+  const next = `/reports/${orderId}`;
+  return existing ? authLink("/sign-in", { email: address, next }) : authLink("/sign-up", { email: address, role: "buyer", next });
 }
 
 export async function findUserById(id: string) {

@@ -5,8 +5,11 @@ export type ReportPreview = {
   id: string;
   locked: true;
   address: { street: string; unit: string | null; city: string; state: string; postalCode: string };
+  /** The day of the visit in the listing's own time zone (an ISO date), whatever zone the reader is in. */
   visitedOn: string | null;
   deliveredAt: string | null;
+  /** The listing's IANA time zone, for the timestamps above. */
+  timeZone: string;
   inspector: { name: string; company: string | null; licenceNumber: string | null } | null;
   clipCount: number;
   surveyedFt: number | null;

@@ -8,7 +8,7 @@ import { POST as submit } from "@/app/api/jobs/[id]/submit/route";
 import { POST as accept } from "@/app/api/jobs/[id]/accept/route";
 import { POST as createOrder } from "@/app/api/orders/route";
 import { getDb } from "@/db/client";
-import { clips, mailOutbox, orders } from "@/db/schema";
+import { clips, mailOutbox, orders, stills } from "@/db/schema";
 import { CLAY_LATERAL_1950S } from "@/lib/engine";
 
 import { call } from "../utils/session";
@@ -93,6 +93,20 @@ describe("drafts and submit", () => {
     expect(order.status).toBe("accepted");
   });
 
+  it("refuses a finding whose still frame was never verified (its upload did not finish)", async () => {
+    const { id, inspector } = await acceptedJob();
+    await addReadyClip(id, inspector.user.id);
+    const db = await getDb();
+    const [unverified] = await db.insert(stills).values({ orderId: id, objectKey: `stills/${id}/never-arrived.jpg` }).returning();
+    const findings = [{ ...CLAY_LATERAL_1950S.findings[0], stillId: unverified.id }];
+    await call(saveDraft, { method: "PUT", params: { id }, body: { record: { ...CLAY_LATERAL_1950S, findings }, narrative: NARRATIVE, recommendation: "", baseRevision: 0 }, cookie: inspector.cookie });
+    const res = await call(submit, { method: "POST", params: { id }, body: { baseRevision: 1 }, cookie: inspector.cookie });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.json.error?.fieldErrors ?? {})).toEqual(["findings[0].stillId"]);
+    await db.update(stills).set({ verifiedAt: new Date() }).where(eq(stills.id, unverified.id));
+    expect((await call(submit, { method: "POST", params: { id }, body: { baseRevision: 1 }, cookie: inspector.cookie })).status).toBe(200);
+  });
+
   it("a good submit stores the evaluation with the engine version, delivers, and invites the buyer once", async () => {
     const { id, inspector, agent, buyerEmail } = await acceptedJob();
     await addReadyClip(id, inspector.user.id);
@@ -106,7 +120,10 @@ describe("drafts and submit", () => {
     expect(inspection.json.inspection).toMatchObject({ submittedAt: expect.any(String), evaluation: expect.objectContaining({ engineVersion: expect.any(String) }) });
     const db = await getDb();
     const mail = await db.select().from(mailOutbox);
-    expect(mail.filter((m) => m.toAddress === buyerEmail && m.subject.includes("is ready"))).toHaveLength(1);
+    const invitations = mail.filter((m) => m.toAddress === buyerEmail && m.subject.includes("is ready"));
+    expect(invitations).toHaveLength(1);
+    // The buyer has no account yet: the link signs them up as a buyer with that address, then opens the report.
+    expect(invitations[0].text).toContain(`/sign-up?email=${encodeURIComponent(buyerEmail)}&role=buyer&next=${encodeURIComponent(`/reports/${id}`)}`);
     expect(mail.filter((m) => m.toAddress === agent.user.email && m.subject.startsWith("Report delivered"))).toHaveLength(1);
     const draftAfter = await call(saveDraft, { method: "PUT", params: { id }, body: { record: {}, narrative: "", recommendation: "", baseRevision: 1 }, cookie: inspector.cookie });
     expect(draftAfter.status).toBe(409);

@@ -12,8 +12,9 @@ function summaryOf(record: RecordInput): ReportSummary {
     id: "00000000-0000-4000-8000-000000000042",
     locked: false,
     address: { street: "42 Sluice Gate Way", unit: null, city: "Harrow Falls", state: "OR", postalCode: "97000" },
-    visitedOn: "2026-03-10T17:00:00.000Z",
+    visitedOn: "2026-03-10",
     deliveredAt: "2026-03-11T09:00:00.000Z",
+    timeZone: "America/Los_Angeles",
     inspector: { name: "Wren Okafor", company: "Okafor Drain Cameras", licenceNumber: "HF-SS-1187" },
     clipCount: 0,
     surveyedFt: evaluation.lengths.surveyed,
@@ -27,7 +28,7 @@ function summaryOf(record: RecordInput): ReportSummary {
     clips: [],
     stills: {},
     engineVersion: evaluation.engineVersion,
-    observedOn: "2026-03-10T17:00:00.000Z",
+    observedOn: "2026-03-10",
   };
 }
 

@@ -3,11 +3,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as complete } from "@/app/api/clips/[clipId]/complete/route";
 import { POST as completePoster } from "@/app/api/clips/[clipId]/poster/complete/route";
 import { POST as presignPoster } from "@/app/api/clips/[clipId]/poster/route";
-import { PATCH as patchClip } from "@/app/api/clips/[clipId]/route";
+import { DELETE as deleteClip, PATCH as patchClip } from "@/app/api/clips/[clipId]/route";
 import { GET as listClips, POST as startClip } from "@/app/api/jobs/[id]/clips/route";
 import { POST as presignStill } from "@/app/api/jobs/[id]/stills/route";
 import { POST as completeStill } from "@/app/api/stills/[stillId]/complete/route";
-import { getClip as clipRow, listStillsForOrder } from "@/db/queries/clips";
+import { getClip as clipRow, listStillsForOrder, verifiedStillIds } from "@/db/queries/clips";
 import { headObject } from "@/lib/storage/multipart";
 import { webmDuration } from "@/lib/uploads/verify";
 
@@ -102,6 +102,19 @@ describe("checking a completed clip by its bytes", () => {
     expect(clip).toMatchObject({ id: clipId, status: "ready", contentType: "video/mp4" });
     expect(Math.abs(clip.durationSeconds - 10)).toBeLessThanOrEqual(0.2);
     expect((await clipRow(clipId))?.completedAt).toBeInstanceOf(Date);
+  });
+
+  it("removing a ready clip marks it removed, deletes its object and takes it off the job's list", async () => {
+    const { clipId, res } = await uploadWhole(demoClip("clay-joints"), "to-remove.mp4");
+    expect(res.status).toBe(200);
+    const key = (await clipRow(clipId))!.objectKey;
+    expect(await headObject(key)).not.toBeNull();
+    expect((await call(deleteClip, { method: "DELETE", params: { clipId }, cookie: job.inspector.cookie })).status).toBe(200);
+    expect((await clipRow(clipId))?.status).toBe("removed");
+    expect(await headObject(key)).toBeNull();
+    const listed = await call(listClips, { params: { id: job.jobId }, cookie: job.inspector.cookie });
+    expect((listed.json.clips as { id: string }[]).map((c) => c.id)).not.toContain(clipId);
+    expect((await call(patchClip, { method: "PATCH", params: { clipId }, body: { startFootage: 3 }, cookie: job.inspector.cookie })).status).toBe(409);
   });
 
   it("judges by the bytes, not the declared type: an MP4 declared as WebM is kept as MP4, a QuickTime brand as QuickTime", async () => {
@@ -248,6 +261,13 @@ describe("posters, start footage and stills", () => {
       (await call(completeStill, { method: "POST", params: { stillId: bad.json.stillId as string }, cookie: job.inspector.cookie })).status,
     ).toBe(422);
     expect((await listStillsForOrder(job.jobId)).map((s) => s.id)).toEqual([still.json.stillId]);
+    expect(await verifiedStillIds(job.jobId)).toEqual([still.json.stillId]);
+
+    // A still whose upload was asked for but never completed is kept for its URL's lifetime, unverified.
+    const pending = await call(presignStill, { method: "POST", params: { id: job.jobId }, body: { contentType: "image/jpeg", sizeBytes: 20 }, cookie: job.inspector.cookie });
+    expect(pending.status).toBe(201);
+    expect((await listStillsForOrder(job.jobId)).map((s) => s.id)).toContain(pending.json.stillId);
+    expect(await verifiedStillIds(job.jobId)).toEqual([still.json.stillId]);
 
     const other = await acceptedJob();
     expect(

@@ -26,6 +26,8 @@ export default async function setup() {
     STRIPE_API_PORT: "",
     AUTH_LIMIT_PER_ACCOUNT: "5",
     AUTH_LIMIT_PER_ADDRESS: "1000",
+    // The browser tests read the invitations and receipts the way a developer does, on /dev/mailbox.
+    MAILBOX_ENABLED: "true",
   };
   const child = spawn(path.join("node_modules", ".bin", "tsx"), ["--tsconfig", "tsconfig.scripts.json", "scripts/start.ts"], { env, stdio: ["ignore", "pipe", "pipe"] });
   let log = "";
@@ -43,7 +45,7 @@ export default async function setup() {
     if (Date.now() > deadline) throw new Error(`the app did not become healthy in 90 s:\n${log}`);
     await new Promise((r) => setTimeout(r, 300));
   }
-  Object.assign(process.env, { GRADELINE_URL: url, GRADELINE_DATA_DIR: dataDir, GRADELINE_APP_PID: String(child.pid) });
+  Object.assign(process.env, { GRADELINE_URL: url, GRADELINE_DATA_DIR: dataDir, GRADELINE_APP_PID: String(child.pid), GRADELINE_S3_URL: `http://127.0.0.1:${s3}` });
   return async () => {
     child.kill("SIGTERM");
     await new Promise((r) => (child.exitCode !== null ? r(null) : child.once("exit", r)));

@@ -11,7 +11,7 @@ import { Input } from "@/components/ui/input";
 import { signInWithPassword } from "@/lib/auth/sign-in-client";
 import { signInSchema, type SignInInput } from "@/lib/validations/auth";
 
-export function SignInForm({ defaultEmail }: { defaultEmail: string }) {
+export function SignInForm({ defaultEmail, next }: { defaultEmail: string; next?: string | null }) {
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -23,7 +23,7 @@ export function SignInForm({ defaultEmail }: { defaultEmail: string }) {
     setFormError(null);
     const result = await signInWithPassword(values.email, values.password);
     if (!result.ok) return setFormError(result.message);
-    window.location.assign("/home");
+    window.location.assign(next ?? "/home");
   });
 
   return (

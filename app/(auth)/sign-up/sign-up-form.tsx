@@ -19,7 +19,7 @@ const ROLES = [
 
 type ApiError = { error?: { message?: string; fieldErrors?: Record<string, string[]> } };
 
-export function SignUpForm({ defaultEmail, defaultRole }: { defaultEmail: string; defaultRole?: SignUpInput["role"] }) {
+export function SignUpForm({ defaultEmail, defaultRole, next }: { defaultEmail: string; defaultRole?: SignUpInput["role"]; next?: string | null }) {
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -42,7 +42,7 @@ export function SignUpForm({ defaultEmail, defaultRole }: { defaultEmail: string
     }
     const signedIn = await signInWithPassword(values.email, values.password);
     if (!signedIn.ok) return setFormError(signedIn.message);
-    window.location.assign("/home");
+    window.location.assign(next ?? "/home");
   });
 
   return (

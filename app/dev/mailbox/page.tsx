@@ -12,6 +12,21 @@ import { readCaughtMail } from "@/services/mail-catcher";
 export const metadata: Metadata = { title: "Mailbox (development)" };
 export const dynamic = "force-dynamic";
 
+const URL_PATTERN = /(https?:\/\/[^\s<>"]+)/;
+
+/** The message text with its addresses made into links, so a developer can follow an invitation. */
+function Linked({ text }: { text: string }) {
+  return text.split(URL_PATTERN).map((part, i) =>
+    i % 2 === 1 ? (
+      <a key={i} href={part} className="text-teal underline underline-offset-2">
+        {part}
+      </a>
+    ) : (
+      part
+    ),
+  );
+}
+
 /** Development only: every e-mail the local SMTP catcher received. */
 export default async function MailboxPage() {
   const e = env();
@@ -39,7 +54,9 @@ export default async function MailboxPage() {
                     {m.attachments.length ? ` · ${m.attachments.map((a) => a.filename).join(", ")}` : ""}
                   </span>
                 </summary>
-                <pre className="overflow-x-auto border-t border-rule px-4 py-3 font-mono text-sm whitespace-pre-wrap">{m.text}</pre>
+                <pre className="overflow-x-auto border-t border-rule px-4 py-3 font-mono text-sm whitespace-pre-wrap">
+                  <Linked text={m.text} />
+                </pre>
               </details>
             </li>
           ))}

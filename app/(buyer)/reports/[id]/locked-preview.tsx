@@ -34,7 +34,7 @@ export function LockedPreview({ preview, returnedPaid, cancelled }: { preview: R
   const state = paymentState(preview, returnedPaid, cancelled);
   const includes = preview.unlockIncludes.length > 0 ? preview.unlockIncludes : UNLOCK_INCLUDES;
   const visited = dateText(preview.visitedOn);
-  const delivered = dateText(preview.deliveredAt);
+  const delivered = dateText(preview.deliveredAt, preview.timeZone);
   const inspector = preview.inspector;
 
   return (

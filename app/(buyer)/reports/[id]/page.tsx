@@ -6,6 +6,7 @@ import { RatedSummary } from "@/components/report/rated-summary";
 import { Alert } from "@/components/ui/alert";
 import { buttonClasses } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
+import { paidRecently } from "@/db/queries/payments";
 import { getReportView } from "@/db/queries/reports";
 import { listShareLinks } from "@/db/queries/share-links";
 import { requireUser } from "@/lib/auth/session";
@@ -50,7 +51,10 @@ export default async function ReportPage({
     );
   }
 
-  const links = await listShareLinks(view.id, user.id);
+  const [links, justPaid] = await Promise.all([
+    listShareLinks(view.id, user.id),
+    query.paid !== undefined ? paidRecently(view.id, user.id, query.paid) : false,
+  ]);
   return (
     <>
       <PageHeader
@@ -68,7 +72,7 @@ export default async function ReportPage({
           </div>
         }
       />
-      {query.paid !== undefined ? (
+      {justPaid ? (
         <Alert tone="success" title="Payment received" className="mb-8" role="status">
           The rated summary is unlocked. A receipt is on its way to {user.email}.
         </Alert>

@@ -1,5 +1,5 @@
 // GET /api/clips/{clipId} - the clip with a short-lived playback URL; PATCH - its start footage; DELETE - cancel or remove
-import { getClipForInspector, markClipAborted, setClipStartFootage, toClipView, WORKABLE_STATUSES } from "@/db/queries/clips";
+import { getClipForInspector, markClipAborted, markClipRemoved, setClipStartFootage, toClipView, WORKABLE_STATUSES } from "@/db/queries/clips";
 import { route } from "@/lib/api/route";
 import { AppError, notFound } from "@/lib/errors";
 import { abortMultipartUpload, deleteObject, MEDIA_URL_SECONDS, signedMediaUrl } from "@/lib/storage/multipart";
@@ -25,7 +25,7 @@ export const GET = route({ permission: "jobs:work", params: clipIdParams }, asyn
 
 export const PATCH = route({ permission: "jobs:work", params: clipIdParams, body: patchClipSchema }, async ({ user, params, body }) => {
   const clip = await load(params.clipId, user.id, true);
-  if (clip.status === "aborted" || clip.status === "rejected") throw new AppError("conflict", "This clip is no longer kept.");
+  if (clip.status === "aborted" || clip.status === "rejected" || clip.status === "removed") throw new AppError("conflict", "This clip is no longer kept.");
   const row = (await setClipStartFootage(clip.id, body.startFootage)) ?? clip;
   return { clip: toClipView(row, await signedMediaUrl(row.posterKey)) };
 });
@@ -34,9 +34,11 @@ export const DELETE = route({ permission: "jobs:work", params: clipIdParams }, a
   const clip = await load(params.clipId, user.id, true);
   if (clip.status === "uploading" && clip.uploadId) await abortMultipartUpload(clip.objectKey, clip.uploadId);
   if (clip.status === "ready") {
+    await markClipRemoved(clip.id);
     await deleteObject(clip.objectKey);
     if (clip.posterKey) await deleteObject(clip.posterKey);
+  } else {
+    await markClipAborted(clip.id, ["uploading", "rejected"]);
   }
-  await markClipAborted(clip.id, ["uploading", "ready", "rejected"]);
   return { ok: true };
 });

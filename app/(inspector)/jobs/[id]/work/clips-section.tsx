@@ -19,6 +19,7 @@ const STATUS: Record<ClipStatus, { label: string; tone: BadgeTone }> = {
   ready: { label: "Ready", tone: "success" },
   rejected: { label: "Rejected", tone: "danger" },
   aborted: { label: "Cancelled", tone: "outline" },
+  removed: { label: "Removed", tone: "outline" },
 };
 
 export const secondsText = (s: number) => `${Math.floor(s / 60)}:${(s % 60).toFixed(1).padStart(4, "0")}`;

@@ -2,7 +2,7 @@
 
 import useSWR from "swr";
 
-export type ClipStatus = "uploading" | "ready" | "rejected" | "aborted";
+export type ClipStatus = "uploading" | "ready" | "rejected" | "aborted" | "removed";
 
 export type ClipSummary = {
   id: string;

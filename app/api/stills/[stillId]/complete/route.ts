@@ -1,5 +1,5 @@
 // POST /api/stills/{stillId}/complete - keep the still if its bytes are a JPEG or PNG, otherwise drop it
-import { deleteStill, getStillForInspector } from "@/db/queries/clips";
+import { deleteStill, getStillForInspector, markStillVerified } from "@/db/queries/clips";
 import { route } from "@/lib/api/route";
 import { AppError, notFound } from "@/lib/errors";
 import { deleteObject, signedMediaUrl } from "@/lib/storage/multipart";
@@ -19,5 +19,6 @@ export const POST = route({ permission: "jobs:work", params: stillIdParams }, as
     }
     throw new AppError("unprocessable", check.reason);
   }
+  await markStillVerified(still.id);
   return { still: { id: still.id, clipId: still.clipId, second: still.second, url: await signedMediaUrl(still.objectKey) } };
 });
