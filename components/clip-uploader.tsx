@@ -217,13 +217,12 @@ class ClipUpload {
   }
 
   private retry(n: number) {
+    if (!navigator.onLine) return this.waitForConnection(n);
     const attempt = (this.attempts.get(n) ?? 0) + 1;
     this.attempts.set(n, attempt);
     if (attempt > MAX_ATTEMPTS)
       return this.set("failed", `Part ${n} failed ${MAX_ATTEMPTS} times. Choose the file again to carry on from the parts already stored.`);
-    this.message = navigator.onLine
-      ? `Part ${n} did not go through; retrying it…`
-      : "The connection dropped. The upload carries on when it returns.";
+    this.message = `Part ${n} did not go through; retrying it…`;
     this.emit();
     setTimeout(
       () => {
@@ -235,6 +234,18 @@ class ClipUpload {
       },
       backoff(attempt - 1),
     );
+  }
+
+  /** Offline: the part goes back in the queue without using up an attempt, and the upload waits for the connection. */
+  private waitForConnection(n: number) {
+    if (!this.queue.includes(n)) this.queue.unshift(n);
+    if (this.status !== "uploading") return;
+    this.set("waiting", "The connection dropped. The upload carries on by itself when it returns.");
+    void whenOnline().then(() => {
+      if (this.status !== "waiting") return;
+      this.set("uploading", "Uploading…");
+      this.pump();
+    });
   }
 
   private async complete(attempt = 0): Promise<void> {
@@ -459,7 +470,7 @@ export function ClipUploader({ jobId, onClipReady }: { jobId: string; onClipRead
               choose(e.target.files);
               e.target.value = "";
             }}
-            className="text-ink file:border-rule-strong file:text-ink hover:file:bg-paper-2 block text-sm file:mr-3 file:h-10 file:rounded-md file:border file:bg-white file:px-4 file:font-medium"
+            className="text-ink file:border-rule-strong file:text-ink hover:file:bg-paper-2 block text-sm file:mr-3 file:min-h-11 file:rounded-md file:border file:bg-white file:px-4 file:font-medium"
           />
           <p id={`${inputId}-hint`} className="text-ink-2 text-sm">
             MP4, QuickTime or WebM, up to 20 GiB each. An interrupted upload carries on when you choose the same file again.
@@ -471,6 +482,7 @@ export function ClipUploader({ jobId, onClipReady }: { jobId: string; onClipRead
           </label>
           <Input
             id={`${inputId}-ft`}
+            className="min-h-11"
             type="number"
             inputMode="decimal"
             min={0}
@@ -556,6 +568,7 @@ function UploadRow({ row, act }: { row: Snapshot; act: (fn: (upload: ClipUpload)
               </label>
               <Input
                 id={footageId}
+                className="min-h-11"
                 type="number"
                 inputMode="decimal"
                 min={0}
@@ -597,13 +610,14 @@ function UploadRow({ row, act }: { row: Snapshot; act: (fn: (upload: ClipUpload)
         {!finished ? (
           <div className="flex flex-wrap gap-2">
             {row.status === "paused" ? (
-              <Button size="sm" variant="secondary" onClick={() => act((u) => u.resume())} aria-label={`Resume upload of ${row.name}`}>
+              <Button size="sm" variant="secondary" className="min-h-11 px-4" onClick={() => act((u) => u.resume())} aria-label={`Resume upload of ${row.name}`}>
                 Resume
               </Button>
             ) : (
               <Button
                 size="sm"
                 variant="secondary"
+                className="min-h-11 px-4"
                 onClick={() => act((u) => u.pause())}
                 disabled={row.status !== "uploading"}
                 aria-label={`Pause upload of ${row.name}`}
@@ -611,7 +625,7 @@ function UploadRow({ row, act }: { row: Snapshot; act: (fn: (upload: ClipUpload)
                 Pause
               </Button>
             )}
-            <Button size="sm" variant="ghost" onClick={() => act((u) => void u.cancel())} aria-label={`Cancel upload of ${row.name}`}>
+            <Button size="sm" variant="ghost" className="min-h-11 px-4" onClick={() => act((u) => void u.cancel())} aria-label={`Cancel upload of ${row.name}`}>
               Cancel
             </Button>
           </div>

@@ -300,7 +300,7 @@ function Drawing({
       style={minWidth ? { minWidth: `${Math.round(minWidth)}px` } : undefined}
       aria-label="Side view of the line; the findings are buttons, and the list below describes the whole line"
     >
-      <g aria-hidden="true">
+      <g aria-hidden="true" className="pointer-events-none">
         <path d={`M8 ${ground}H${W - 8}`} className="stroke-ink-2" strokeWidth="1.2" />
         <text x="8" y={ground - 5} className="fill-ink-2 text-[10.5px]">
           Ground
@@ -456,6 +456,8 @@ function Drawing({
             onClick={onSelectFinding ? () => onSelectFinding(f.index) : undefined}
             onKeyDown={onSelectFinding ? (e) => onKey(e, f.index) : undefined}
           >
+            {/* The whole column from chip to pipe takes a tap, not only the thin stem. */}
+            <rect x={cx - CHIP_W / 2 - 3} y={chipTop - 3} width={CHIP_W + 6} height={Math.max(CHIP_H + 6, py - chipTop + 10)} fill="transparent" />
             <path d={`M${cx} ${chipTop + CHIP_H}V${py - 6}`} className={sev.stroke} strokeWidth={active ? 2 : 1} />
             {f.to !== null ? (
               <polyline points={polyline(f.at, f.to)} fill="none" className={sev.stroke} strokeWidth="14" strokeOpacity="0.85" />

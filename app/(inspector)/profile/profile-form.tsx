@@ -11,6 +11,7 @@ import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { inspectorProfileSchema, insuranceUploadSchema, WEEKDAYS, type InspectorProfileInput } from "@/lib/validations/orders";
+import { sendJson } from "@/lib/api/client";
 
 export type InspectorProfile = InspectorProfileInput & {
   verified: boolean;
@@ -20,20 +21,8 @@ export type InspectorProfile = InspectorProfileInput & {
 };
 
 type Weekday = (typeof WEEKDAYS)[number];
-type ApiError = { code: string; message: string; fieldErrors?: Record<string, string[]> };
 
 const DAY_NAMES: Record<Weekday, string> = { mon: "Monday", tue: "Tuesday", wed: "Wednesday", thu: "Thursday", fri: "Friday", sat: "Saturday", sun: "Sunday" };
-
-async function send<T>(url: string, method: "POST" | "PUT", body: unknown): Promise<{ ok: true; data: T } | { ok: false; status: number; error: ApiError }> {
-  try {
-    const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    const data: unknown = await res.json().catch(() => null);
-    if (res.ok) return { ok: true, data: data as T };
-    return { ok: false, status: res.status, error: (data as { error?: ApiError } | null)?.error ?? { code: "internal", message: "Something went wrong. Please try again." } };
-  } catch {
-    return { ok: false, status: 0, error: { code: "network", message: "Gradeline could not be reached. Check your connection and try again." } };
-  }
-}
 
 function toFormValues(p: InspectorProfile): InspectorProfileInput {
   const availability: InspectorProfileInput["availability"] = {};
@@ -106,7 +95,7 @@ function DetailsForm({ initial, onSaved }: { initial: InspectorProfile; onSaved:
       });
     }
     if (badHours) return setNotice({ tone: "danger", text: "Some working hours end before they start." });
-    const res = await send<{ profile: InspectorProfile }>("/api/inspector/profile", "PUT", values);
+    const res = await sendJson<{ profile: InspectorProfile }>("/api/inspector/profile", "PUT", values);
     if (!res.ok) {
       for (const [key, messages] of Object.entries(res.error.fieldErrors ?? {})) {
         setError(key.replace(/\[(\d+)\]/g, ".$1") as "licenceNumber", { type: "server", message: messages[0] });
@@ -345,7 +334,7 @@ function InsuranceUpload({ current, onUploaded }: { current: { fileName: string 
     setDone(null);
     setProgress(0);
     setStage("preparing");
-    const start = await send<{ uploadUrl: string; key: string }>("/api/inspector/insurance", "POST", check.data);
+    const start = await sendJson<{ uploadUrl: string; key: string }>("/api/inspector/insurance", "POST", check.data);
     if (!start.ok) {
       setStage("idle");
       return setError(start.error.message);
@@ -356,7 +345,7 @@ function InsuranceUpload({ current, onUploaded }: { current: { fileName: string 
       return setError("The upload did not finish. Check your connection and try again.");
     }
     setStage("checking");
-    const complete = await send<{ insurance: { fileName: string } }>("/api/inspector/insurance/complete", "POST", { key: start.data.key, fileName: file.name });
+    const complete = await sendJson<{ insurance: { fileName: string } }>("/api/inspector/insurance/complete", "POST", { key: start.data.key, fileName: file.name });
     setStage("idle");
     if (!complete.ok) return setError(complete.error.message);
     onUploaded(complete.data.insurance);

@@ -15,31 +15,14 @@ import { Textarea } from "@/components/ui/textarea";
 import { formatDateTime } from "@/lib/format";
 import type { OrderDetailDto, OrderDto } from "@/lib/orders/dto";
 import { formatTimeRange } from "@/lib/time-zones";
+import { getJson, postJson } from "@/lib/api/client";
 
-type ApiError = { code: string; message: string; fieldErrors?: Record<string, string[]> };
 
 const INVITATION_TEXT: Record<OrderDto["buyer"]["invitation"], { label: string; tone: "neutral" | "teal" | "success"; note: string }> = {
   waiting_for_report: { label: "Not invited yet", tone: "neutral", note: "The invitation goes out as soon as the findings are delivered." },
   invited: { label: "Invited", tone: "teal", note: "The buyer has the invitation e-mail and can unlock the report." },
   joined: { label: "Joined", tone: "success", note: "The buyer has an account and can see the report." },
 };
-
-async function getJson(url: string): Promise<OrderDetailDto> {
-  const res = await fetch(url, { headers: { accept: "application/json" } });
-  if (!res.ok) throw new Error("The order could not be refreshed.");
-  return (await res.json()) as OrderDetailDto;
-}
-
-async function post(url: string, body: unknown): Promise<{ ok: true; data: OrderDetailDto } | { ok: false; error: ApiError }> {
-  try {
-    const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    const data: unknown = await res.json().catch(() => null);
-    if (res.ok) return { ok: true, data: data as OrderDetailDto };
-    return { ok: false, error: (data as { error?: ApiError } | null)?.error ?? { code: "internal", message: "Something went wrong. Please try again." } };
-  } catch {
-    return { ok: false, error: { code: "network", message: "Gradeline could not be reached. Check your connection and try again." } };
-  }
-}
 
 function Row({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -54,7 +37,7 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
 export type OrderLabels = { propertyType: string; occupancy: string };
 
 export function OrderDetail({ initial, labels }: { initial: OrderDetailDto; labels: OrderLabels }) {
-  const { data, mutate } = useSWR(`/api/orders/${initial.order.id}`, getJson, { fallbackData: initial, refreshInterval: 15_000 });
+  const { data, mutate } = useSWR(`/api/orders/${initial.order.id}`, (url: string) => getJson<OrderDetailDto>(url), { fallbackData: initial, refreshInterval: 15_000 });
   const { order, events, proposals } = data ?? initial;
   const now = useNow();
   const [message, setMessage] = useState<{ tone: "success" | "danger"; text: string } | null>(null);
@@ -69,7 +52,7 @@ export function OrderDetail({ initial, labels }: { initial: OrderDetailDto; labe
   async function confirm(proposalId: string) {
     setBusy(proposalId);
     setMessage(null);
-    const res = await post(`/api/orders/${order.id}/appointment`, { proposalId });
+    const res = await postJson<OrderDetailDto>(`/api/orders/${order.id}/appointment`, { proposalId });
     setBusy(null);
     if (!res.ok) return setMessage({ tone: "danger", text: res.error.message });
     await mutate(res.data, { revalidate: false });
@@ -278,7 +261,7 @@ function CancelOrder({ orderId, onCancelled }: { orderId: string; onCancelled: (
     }
     setPending(true);
     setError(null);
-    const res = await post(`/api/orders/${orderId}/cancel`, { reason: reason.trim() });
+    const res = await postJson<OrderDetailDto>(`/api/orders/${orderId}/cancel`, { reason: reason.trim() });
     setPending(false);
     if (!res.ok) {
       setError(res.error.fieldErrors?.reason?.[0] ?? res.error.message);

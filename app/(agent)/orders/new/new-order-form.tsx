@@ -20,11 +20,11 @@ import { Textarea } from "@/components/ui/textarea";
 import type { OrderDto } from "@/lib/orders/dto";
 import { DEFAULT_TIME_ZONE, isoToZonedLocal, rezoneIso, US_TIME_ZONES, zonedLocalToIso } from "@/lib/time-zones";
 import { createOrderSchema, OCCUPANCIES, OCCUPANCY_LABELS, PROPERTY_TYPE_LABELS, PROPERTY_TYPES } from "@/lib/validations/orders";
+import { postJson } from "@/lib/api/client";
 
 type FormIn = z.input<typeof createOrderSchema>;
 type FormOut = z.output<typeof createOrderSchema>;
 type Quote = { served: boolean; lines: { label: string; cents: number }[]; priceCents: number; inspectorPayoutCents: number };
-type ApiError = { code: string; message: string; fieldErrors?: Record<string, string[]> };
 
 const optionalText = { setValueAs: (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v) };
 
@@ -37,18 +37,6 @@ const toFormPath = (key: string) => key.replace(/\[(\d+)\]/g, ".$1");
 function plain(error: FieldError | undefined, whenMissing: string): string | undefined {
   if (!error) return undefined;
   return error.type === "invalid_format" || error.type === "invalid_type" ? whenMissing : error.message;
-}
-
-async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; data: T } | { ok: false; status: number; error: ApiError }> {
-  try {
-    const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    const data: unknown = await res.json().catch(() => null);
-    if (res.ok) return { ok: true, data: data as T };
-    const error = (data as { error?: ApiError } | null)?.error;
-    return { ok: false, status: res.status, error: error ?? { code: "internal", message: "Something went wrong. Please try again." } };
-  } catch {
-    return { ok: false, status: 0, error: { code: "network", message: "Gradeline could not be reached. Check your connection and try again." } };
-  }
 }
 
 async function fetchQuote([, postalCode, cleanoutKnown, buildingSewers, deadline]: readonly [string, string, boolean, number, string]) {

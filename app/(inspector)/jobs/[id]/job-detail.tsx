@@ -16,9 +16,9 @@ import { Textarea } from "@/components/ui/textarea";
 import { formatDateTime } from "@/lib/format";
 import type { JobDto, OrderEventDto, ProposalDto } from "@/lib/orders/dto";
 import { formatTimeRange, isoToZonedLocal, zonedLocalToIso } from "@/lib/time-zones";
+import { getJson, postJson } from "@/lib/api/client";
 
 export type JobDetailData = { job: JobDto; proposals: ProposalDto[]; events: OrderEventDto[] };
-type ApiError = { code: string; message: string; fieldErrors?: Record<string, string[]> };
 type Slot = { key: number; date: string; from: string; to: string };
 
 const PROPOSAL_LABELS: Record<ProposalDto["status"], { label: string; tone: "neutral" | "teal" | "success" | "outline" }> = {
@@ -27,23 +27,6 @@ const PROPOSAL_LABELS: Record<ProposalDto["status"], { label: string; tone: "neu
   declined: { label: "Not chosen", tone: "outline" },
   withdrawn: { label: "Withdrawn", tone: "outline" },
 };
-
-async function getJson(url: string): Promise<JobDetailData> {
-  const res = await fetch(url, { headers: { accept: "application/json" } });
-  if (!res.ok) throw new Error(res.status === 404 ? "This job is no longer available to you." : "The job could not be refreshed.");
-  return (await res.json()) as JobDetailData;
-}
-
-async function post<T>(url: string, body?: unknown): Promise<{ ok: true; data: T } | { ok: false; status: number; error: ApiError }> {
-  try {
-    const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-    const data: unknown = await res.json().catch(() => null);
-    if (res.ok) return { ok: true, data: data as T };
-    return { ok: false, status: res.status, error: (data as { error?: ApiError } | null)?.error ?? { code: "internal", message: "Something went wrong. Please try again." } };
-  } catch {
-    return { ok: false, status: 0, error: { code: "network", message: "Gradeline could not be reached. Check your connection and try again." } };
-  }
-}
 
 /** A first suggestion: the start of the first window still ahead, one hour long. */
 function suggestSlot(job: JobDto, key: number): Slot {
@@ -81,7 +64,7 @@ function Detail({ label, children }: { label: string; children: ReactNode }) {
 export type JobLabels = { propertyType: string; occupancy: string };
 
 export function JobDetail({ initial, inspectorId, labels }: { initial: JobDetailData; inspectorId: string; labels: JobLabels }) {
-  const { data, mutate } = useSWR(`/api/jobs/${initial.job.id}`, getJson, { fallbackData: initial, refreshInterval: 15_000 });
+  const { data, mutate } = useSWR(`/api/jobs/${initial.job.id}`, (url: string) => getJson<JobDetailData>(url, "This job is no longer available to you."), { fallbackData: initial, refreshInterval: 15_000 });
   const { job, proposals, events } = data ?? initial;
   const now = useNow();
   const [notice, setNotice] = useState<{ tone: "success" | "warning" | "danger"; text: string } | null>(null);
@@ -94,7 +77,7 @@ export function JobDetail({ initial, inspectorId, labels }: { initial: JobDetail
   async function accept() {
     setAccepting(true);
     setNotice(null);
-    const res = await post<{ job: JobDto }>(`/api/jobs/${job.id}/accept`);
+    const res = await postJson<{ job: JobDto }>(`/api/jobs/${job.id}/accept`);
     setAccepting(false);
     if (res.ok) setNotice({ tone: "success", text: "The job is yours. Propose one or more visit times below." });
     else setNotice({ tone: res.status === 409 ? "warning" : "danger", text: res.error.message });
@@ -261,7 +244,7 @@ function ProposeTimes({ job, proposals, onProposed }: { job: JobDto; proposals: 
       return;
     }
     setPending(true);
-    const res = await post<{ proposals: ProposalDto[] }>(`/api/jobs/${job.id}/appointments`, { slots: checked.map((c) => c.iso) });
+    const res = await postJson<{ proposals: ProposalDto[] }>(`/api/jobs/${job.id}/appointments`, { slots: checked.map((c) => c.iso) });
     setPending(false);
     if (!res.ok) {
       const mapped: Record<number, { start?: string; end?: string }> = {};
@@ -382,7 +365,7 @@ function ReleaseJob({ jobId, onReleased }: { jobId: string; onReleased: () => vo
       return;
     }
     setPending(true);
-    const res = await post<{ ok: true }>(`/api/jobs/${jobId}/release`, { reason: reason.trim() });
+    const res = await postJson<{ ok: true }>(`/api/jobs/${jobId}/release`, { reason: reason.trim() });
     setPending(false);
     if (!res.ok) return setError(res.error.fieldErrors?.reason?.[0] ?? res.error.message);
     onReleased();

@@ -1,5 +1,0 @@
-import { AreaLoading } from "@/components/area-loading";
-
-export default function Loading() {
-  return <AreaLoading />;
-}
