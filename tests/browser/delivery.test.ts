@@ -53,9 +53,6 @@ async function openSection(page: Page, id: string) {
   await expect.poll(() => page.locator(`#panel-${id}`).isVisible()).toBe(true);
 }
 
-const progress = (page: Page, name: string) =>
-  page.getByRole("progressbar", { name: `Upload of ${name}` }).getAttribute("aria-valuenow").then(Number).catch(() => -1);
-
 /** Part numbers of the storage PUTs this page sends, and those that storage stored (200). */
 function watchParts(page: Page) {
   const log = { sent: [] as number[], stored: new Set<number>() };
