@@ -1,3 +1,4 @@
+import clsx from "clsx";
 import Link from "next/link";
 import type { ReactNode } from "react";
 
@@ -29,11 +30,13 @@ export function SkipLink() {
 /** The signed-in frame: top bar with logo, role nav and account; a phone menu below lg; main with a max width. */
 export function AppShell({ user, nav, homeHref, children }: { user: ShellUser; nav: NavItem[]; homeHref?: string; children: ReactNode }) {
   const role = ROLE_LABELS[user.role];
+  // A long menu (the admin's) leaves no room for the name beside it until the widest screens.
+  const crowded = nav.length > 6;
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
       <header className="border-rule bg-paper relative z-30 border-b print:hidden">
-        <div className="mx-auto flex h-15 max-w-6xl items-stretch gap-8 px-4 sm:px-6">
+        <div className="mx-auto flex h-15 max-w-6xl items-stretch gap-6 px-4 sm:px-6 xl:gap-8">
           <Link href={homeHref ?? nav[0]?.href ?? "/"} className="flex items-center self-center rounded-sm">
             <Logo />
             <span className="sr-only">, home</span>
@@ -42,7 +45,7 @@ export function AppShell({ user, nav, homeHref, children }: { user: ShellUser; n
             <NavLinks items={nav} />
           </nav>
           <div className="ml-auto hidden items-center gap-4 lg:flex">
-            <p className="text-right text-sm leading-tight">
+            <p className={clsx("text-right text-sm leading-tight whitespace-nowrap", crowded && "hidden xl:block")}>
               <span className="text-ink block font-medium">{user.name}</span>
               <span className="text-ink-2 block text-xs">{role}</span>
             </p>

@@ -29,7 +29,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
               href={item.href}
               aria-current={active ? "page" : undefined}
               className={clsx(
-                "-mb-px flex items-center border-b-2 px-3 text-sm transition-colors",
+                "-mb-px flex items-center border-b-2 px-2 text-sm whitespace-nowrap transition-colors xl:px-3",
                 active ? "border-copper text-ink font-medium" : "text-ink-2 hover:border-rule-strong hover:text-ink border-transparent",
               )}
             >

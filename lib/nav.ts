@@ -24,7 +24,7 @@ export function navFor(role: Role, opts: { mailbox: boolean }): NavItem[] {
         { href: "/admin/inspectors", label: "Inspectors" },
         { href: "/admin/payments", label: "Payments" },
         { href: "/admin/disputes", label: "Disputes" },
-        { href: "/admin/prices", label: "Prices and rates" },
+        { href: "/admin/prices", label: "Prices" },
         { href: "/admin/users", label: "Users" },
         { href: "/admin/audit", label: "Audit log" },
         ...mailbox,

@@ -18,7 +18,7 @@ export const metadata: Metadata = {
 
 const P = DEFAULT_PRICES;
 const pct = (bps: number) => `${bps / 100}%`;
-const REUSE_FRESH_DAYS = 180;
+const REUSE_FRESH_DAYS = P.reuseFreshDays;
 
 const defects = [
   "Roots at joints and through cracks",

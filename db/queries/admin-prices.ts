@@ -44,6 +44,7 @@ export async function listPriceHistory(market = DEFAULT_MARKET): Promise<PriceVe
     reuseCents: p.reuseCents,
     platformFeeBps: p.platformFeeBps,
     reuseInspectorShareBps: p.reuseInspectorShareBps,
+    reuseFreshDays: p.reuseFreshDays,
     effectiveAt: p.effectiveAt.toISOString(),
     sourceNote: p.sourceNote,
     by,

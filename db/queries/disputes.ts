@@ -2,6 +2,7 @@ import "server-only";
 
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 
+import { DISPUTE_OUTCOMES, DISPUTE_REASONS, type DisputeDto } from "@/lib/disputes";
 import { AppError } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/render";
 
@@ -9,8 +10,31 @@ import { getDb } from "../client";
 import { disputeMessages, disputes, listings, orders, users } from "../schema";
 import { enqueueMail } from "./outbox";
 
-export const DISPUTE_REASONS = { missing_footage: "Part of the line was not filmed", wrong_address: "Wrong address", unreadable_clips: "Clips cannot be played or read", other: "Something else" } as const;
-export const DISPUTE_OUTCOMES = { no_action: "No action", redeliver: "Inspector re-delivers", refund: "Refund" } as const;
+export { DISPUTE_OUTCOMES, DISPUTE_REASONS };
+
+type DisputeRow = typeof disputes.$inferSelect;
+
+export const disputeDto = (d: DisputeRow): DisputeDto => ({
+  id: d.id,
+  status: d.status,
+  reason: d.reason as DisputeDto["reason"],
+  createdAt: d.createdAt.toISOString(),
+  outcome: (d.outcome as DisputeDto["outcome"]) ?? null,
+  outcomeNote: d.outcomeNote,
+  closedAt: d.closedAt?.toISOString() ?? null,
+});
+
+/** The newest dispute this person opened on this report, as they may see it. */
+export async function latestDisputeBy(orderId: string, userId: string): Promise<DisputeDto | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select()
+    .from(disputes)
+    .where(and(eq(disputes.orderId, orderId), eq(disputes.openedBy, userId)))
+    .orderBy(desc(disputes.createdAt))
+    .limit(1);
+  return row ? disputeDto(row) : null;
+}
 
 export async function openDispute(opener: { id: string; email: string; name: string }, orderId: string, input: { reason: keyof typeof DISPUTE_REASONS; message: string }) {
   const db = await getDb();

@@ -69,6 +69,12 @@ export async function reportAccessFor(r: ReportOrder, viewer: Viewer): Promise<"
   }
 }
 
+/** Whether this viewer may see the report at all (its preview or its summary), without building it. */
+export async function canSeeReport(orderId: string, viewer: Viewer): Promise<boolean> {
+  const r = await loadReportOrder(orderId);
+  return !!r && (await reportAccessFor(r, viewer)) !== null;
+}
+
 async function preview(r: ReportOrder, viewerId: string | null): Promise<ReportPreview> {
   const db = await getDb();
   const [[clipCount], [inspection], [payment]] = await Promise.all([

@@ -1,6 +1,6 @@
 import "server-only";
 
-import { and, desc, eq, gte, inArray, isNotNull, isNull } from "drizzle-orm";
+import { and, desc, eq, gte, inArray, isNotNull, isNull, sql } from "drizzle-orm";
 
 import { AppError } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/render";
@@ -14,7 +14,7 @@ import { reportInvitationPath } from "./users";
 
 export type FreshReport = { orderId: string; visitedOn: string; inspectorName: string | null; priceCents: number };
 
-/** The newest report of the listing that is still fresh enough to sell again (never a reuse of a reuse). */
+/** The newest report of the listing still fresh enough to sell again (the admin's days since the visit; never a reuse of a reuse). */
 export async function findFreshReport(addressKey: string): Promise<FreshReport | null> {
   const db = await getDb();
   const prices = await currentPrices();
@@ -31,7 +31,7 @@ export async function findFreshReport(addressKey: string): Promise<FreshReport |
         inArray(orders.status, ["delivered", "unlocked", "refunded"]),
         isNull(orders.reuseOfOrderId),
         isNotNull(inspections.submittedAt),
-        gte(orders.deliveredAt, since),
+        gte(sql`coalesce(${orders.appointmentStart}, ${orders.deliveredAt})`, since.toISOString()),
       ),
     )
     .orderBy(desc(orders.deliveredAt))

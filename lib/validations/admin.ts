@@ -48,6 +48,11 @@ export const priceVersionSchema = z
     reuseCents: cents("reuse price"),
     platformFeeBps: bps("platform fee"),
     reuseInspectorShareBps: bps("inspector's reuse share"),
+    reuseFreshDays: z
+      .number({ error: "Enter the number of days a report stays fresh." })
+      .int({ error: "Use whole days." })
+      .min(1, { error: "At least 1 day." })
+      .max(730, { error: "At most 730 days: a report over two years old says little about the line today." }),
     sourceNote: note.optional(),
   })
   .strict();

@@ -80,6 +80,34 @@ describe("prices", async () => {
     expect((await post({ baseCents: 30000 })).status).toBe(400);
     expect(await counts()).toEqual(before);
   });
+
+  it("saves the reuse freshness in days with the dated prices, and refuses zero, fractions and over two years", async () => {
+    for (const [reuseFreshDays, message] of [
+      [0, "At least 1 day."],
+      [12.5, "Use whole days."],
+      [731, "At most 730 days: a report over two years old says little about the line today."],
+    ] as const) {
+      const before = await counts();
+      const bad = await post({ ...DEFAULT_PRICES, reuseFreshDays });
+      expect(bad.status).toBe(400);
+      expect(bad.json.error?.fieldErrors).toEqual({ reuseFreshDays: [message] });
+      expect(await counts()).toEqual(before);
+    }
+    const { reuseFreshDays: _omitted, ...withoutDays } = DEFAULT_PRICES;
+    expect((await post(withoutDays)).json.error?.fieldErrors).toHaveProperty("reuseFreshDays");
+
+    const res = await post({ ...DEFAULT_PRICES, reuseFreshDays: 365, sourceNote: "A year is fresh enough here" });
+    expect(res.status).toBe(200);
+    expect(res.json.current).toMatchObject({ reuseFreshDays: 365 });
+    expect((res.json.history as { reuseFreshDays: number }[])[0].reuseFreshDays).toBe(365);
+    expect((await currentPrices()).reuseFreshDays).toBe(365);
+    const db = await getDb();
+    const [entry] = await db
+      .select()
+      .from(auditLog)
+      .where(eq(auditLog.targetId, (res.json.current as { id: string }).id));
+    expect(entry.data).toMatchObject({ next: { reuseFreshDays: 365 }, previous: { reuseFreshDays: expect.any(Number) } });
+  });
 });
 
 describe("the repair-cost rate table", async () => {

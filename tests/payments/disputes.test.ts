@@ -7,7 +7,7 @@ import { GET as queue } from "@/app/api/admin/disputes/route";
 import { POST as openDispute } from "@/app/api/reports/[id]/disputes/route";
 import { GET as getReport } from "@/app/api/reports/[id]/route";
 import { getDb } from "@/db/client";
-import { mailOutbox, payments } from "@/db/schema";
+import { disputes, mailOutbox, payments } from "@/db/schema";
 
 import { unlockedReport } from "../utils/payments";
 import { call } from "../utils/session";
@@ -43,5 +43,16 @@ describe("disputes", () => {
     expect((await call(openDispute, { method: "POST", params: { id: r.id }, body: { reason: "other", message: "This is not my report." }, cookie: stranger.cookie })).status).toBe(404);
     expect((await call(openDispute, { method: "POST", params: { id: r.id }, body: { reason: "wrong_address", message: "Wrong house entirely here." }, cookie: r.agent.cookie })).status).toBe(201);
     expect((await call(queue, { cookie: r.agent.cookie })).status).toBe(404);
+  });
+
+  it("refuses an unknown reason, a too-short message and unknown fields with field errors, and opens nothing", async () => {
+    const r = await unlockedReport();
+    const post = (body: unknown) => call(openDispute, { method: "POST", params: { id: r.id }, body, cookie: r.buyer.cookie });
+    const bad = await post({ reason: "too_expensive", message: "short" });
+    expect(bad.status).toBe(400);
+    expect(bad.json.error?.fieldErrors).toEqual({ reason: ["Choose what is wrong."], message: ["Say in a sentence or two what is wrong."] });
+    expect((await post({ reason: "other", message: "A long enough message here.", status: "closed" })).status).toBe(400);
+    const db = await getDb();
+    expect(await db.$count(disputes, eq(disputes.orderId, r.id))).toBe(0);
   });
 });

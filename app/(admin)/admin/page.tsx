@@ -144,7 +144,16 @@ function AtRiskList({ orders, total }: { orders: OrderDto[]; total: number }) {
           />
         }
         columns={[
-          { key: "listing", header: "Listing", primary: true, cell: (o) => <span>{formatAddress(o.address)}</span> },
+          {
+            key: "listing",
+            header: "Listing",
+            primary: true,
+            cell: (o) => (
+              <Link href={`/admin/orders/${o.id}`} className="text-teal underline underline-offset-2">
+                {formatAddress(o.address)}
+              </Link>
+            ),
+          },
           {
             key: "state",
             header: "State",

@@ -10,33 +10,16 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import type { AuditEntryDto, AuditPage } from "@/db/queries/admin-audit";
+import { AUDIT_ACTIONS as ACTIONS } from "@/lib/audit-actions";
 import { formatDateTime } from "@/lib/format";
 import { US_TIME_ZONES } from "@/lib/time-zones";
 
 type Filters = { action: string; actor: string; from: string; to: string };
 
-const ACTIONS: Record<string, string> = {
-  "admin.inspector_approved": "Inspector approved",
-  "admin.inspector_rejected": "Inspector rejected",
-  "admin.prices_changed": "Prices changed",
-  "admin.rates_changed": "Rate table changed",
-  "admin.user_disabled": "Account disabled",
-  "admin.user_enabled": "Account enabled",
-  "admin.user_role_changed": "Role changed",
-  "auth.sign_in": "Signed in",
-  "auth.sign_in_failed": "Sign-in failed",
-  "auth.sign_up": "Signed up",
-  "inspector.insurance_uploaded": "Insurance certificate uploaded",
-  "inspector.licence_expired": "Licence expired, verification withdrawn",
-  "inspector.profile_saved": "Inspector profile saved",
-  "payments.refund": "Refund",
-  "payments.event_refused": "Payment event refused",
-  "security.webhook_signature_rejected": "Webhook with a bad signature",
-};
-
 const PREFIXES = [
   ["admin.", "Admin actions"],
   ["auth.", "Sign-ins"],
+  ["disputes.", "Disputes"],
   ["inspector.", "Inspectors"],
   ["payments.", "Payments"],
   ["security.", "Security"],

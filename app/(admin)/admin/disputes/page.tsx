@@ -43,9 +43,14 @@ export default async function DisputesPage() {
                     </ol>
                   ) : null}
                   {d.outcomeNote ? <p className="text-sm">Decision: {d.outcomeNote}</p> : null}
-                  <Link className="text-sm text-teal underline underline-offset-4" href={`/admin/payments`}>
-                    Payments and refunds
-                  </Link>
+                  <p className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
+                    <Link className="text-teal underline underline-offset-4" href={`/admin/orders/${d.orderId}`}>
+                      Order, payments and audit trail
+                    </Link>
+                    <Link className="text-teal underline underline-offset-4" href="/admin/payments">
+                      Payments and refunds
+                    </Link>
+                  </p>
                   {d.status === "open" ? <DisputeActions disputeId={d.id} /> : null}
                 </CardBody>
               </Card>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -57,7 +58,11 @@ export default async function AdminPaymentsPage() {
               <Card>
                 <CardHeader
                   as="h2"
-                  title={p.address}
+                  title={
+                    <Link href={`/admin/orders/${p.orderId}`} className="text-teal underline underline-offset-2">
+                      {p.address}
+                    </Link>
+                  }
                   description={`${p.buyerEmail} · ${p.status.replace("_", " ")}${p.paidAt ? ` · paid ${formatDate(p.paidAt)}` : ""}`}
                   actions={
                     <span className="text-lg">

@@ -19,7 +19,7 @@ import { ScaledInput } from "./scaled-input";
 
 export type PricesData = { current: Prices & { id: string | null }; history: PriceVersionDto[] };
 
-type Key = Exclude<keyof PriceVersionInput, "sourceNote">;
+type Key = Exclude<keyof PriceVersionInput, "sourceNote" | "reuseFreshDays">;
 
 const FIELDS: { name: Key; label: string; hint: string; unit: "dollars" | "percent" }[] = [
   { name: "baseCents", label: "Base price", hint: "One building sewer, known cleanout, a normal deadline.", unit: "dollars" },
@@ -59,6 +59,7 @@ const valuesOf = (p: Prices): PriceVersionInput => ({
   reuseCents: p.reuseCents,
   platformFeeBps: p.platformFeeBps,
   reuseInspectorShareBps: p.reuseInspectorShareBps,
+  reuseFreshDays: p.reuseFreshDays,
   sourceNote: "",
 });
 
@@ -104,6 +105,22 @@ export function PriceForm({ current, onSaved }: { current: Prices; onSaved: (dat
           {FIELDS.map((f) => (
             <MoneyField key={f.name} control={control} {...f} error={errors[f.name]?.message} />
           ))}
+          <Field
+            label="Report reuse freshness (days)"
+            hint="How long after the visit a later buyer of the listing may unlock the report at the reuse price."
+            error={errors.reuseFreshDays?.message}
+            required
+          >
+            {(c) => (
+              <Input
+                {...c}
+                inputMode="numeric"
+                autoComplete="off"
+                className="num"
+                {...register("reuseFreshDays", { valueAsNumber: true })}
+              />
+            )}
+          </Field>
           <Field
             label="Note on this change"
             optional

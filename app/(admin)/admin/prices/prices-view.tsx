@@ -59,11 +59,11 @@ export function PricesView({ prices: initialPrices, rates: initialRates }: { pri
             },
             {
               key: "reuse",
-              header: "Reuse · share",
+              header: "Reuse · share · fresh for",
               align: "right",
               cell: (p) => (
                 <span className="num whitespace-nowrap">
-                  <Money cents={p.reuseCents} /> · {percent(p.reuseInspectorShareBps)}
+                  <Money cents={p.reuseCents} /> · {percent(p.reuseInspectorShareBps)} · {p.reuseFreshDays}&nbsp;days
                 </span>
               ),
             },

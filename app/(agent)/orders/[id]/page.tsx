@@ -1,8 +1,11 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
+import { DisputePanel } from "@/components/report/dispute-panel";
 import { PageHeader } from "@/components/ui/page-header";
+import { latestDisputeBy } from "@/db/queries/disputes";
 import { getOrderDetailForAgent } from "@/db/queries/order-detail";
+import { canSeeReport } from "@/db/queries/reports";
 import { requireUser } from "@/lib/auth/session";
 import { idParams, OCCUPANCY_LABELS, PROPERTY_TYPE_LABELS } from "@/lib/validations/orders";
 
@@ -17,6 +20,7 @@ export default async function OrderPage({ params }: { params: Promise<{ id: stri
   const detail = await getOrderDetailForAgent(parsed.data.id, user.id);
   if (!detail) notFound();
   const { address } = detail.order;
+  const disputable = ["delivered", "unlocked"].includes(detail.order.status) && (await canSeeReport(detail.order.id, user));
   const labels = {
     propertyType: PROPERTY_TYPE_LABELS[detail.order.propertyType as keyof typeof PROPERTY_TYPE_LABELS] ?? detail.order.propertyType,
     occupancy: OCCUPANCY_LABELS[detail.order.occupancy as keyof typeof OCCUPANCY_LABELS] ?? detail.order.occupancy,
@@ -30,6 +34,11 @@ export default async function OrderPage({ params }: { params: Promise<{ id: stri
         description={`${address.city}, ${address.state} ${address.postalCode}`}
       />
       <OrderDetail initial={detail} labels={labels} />
+      {disputable ? (
+        <div className="mt-8">
+          <DisputePanel reportId={detail.order.id} initial={await latestDisputeBy(detail.order.id, user.id)} />
+        </div>
+      ) : null}
     </>
   );
 }

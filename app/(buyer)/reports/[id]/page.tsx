@@ -2,10 +2,12 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 
+import { DisputePanel } from "@/components/report/dispute-panel";
 import { RatedSummary } from "@/components/report/rated-summary";
 import { Alert } from "@/components/ui/alert";
 import { buttonClasses } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
+import { latestDisputeBy } from "@/db/queries/disputes";
 import { paidRecently } from "@/db/queries/payments";
 import { getReportView } from "@/db/queries/reports";
 import { listShareLinks } from "@/db/queries/share-links";
@@ -51,9 +53,10 @@ export default async function ReportPage({
     );
   }
 
-  const [links, justPaid] = await Promise.all([
+  const [links, justPaid, dispute] = await Promise.all([
     listShareLinks(view.id, user.id),
     query.paid !== undefined ? paidRecently(view.id, user.id, query.paid) : false,
+    latestDisputeBy(view.id, user.id),
   ]);
   return (
     <>
@@ -83,6 +86,9 @@ export default async function ReportPage({
           reportId={view.id}
           initialLinks={links.map(({ id, label, expiresAt, revokedAt, createdAt }) => ({ id, label, expiresAt, revokedAt, createdAt }))}
         />
+      </div>
+      <div className="mt-8" data-print="hide">
+        <DisputePanel reportId={view.id} initial={dispute} />
       </div>
     </>
   );

@@ -1,0 +1,22 @@
+/** Plain words for the audit log's action codes. */
+export const AUDIT_ACTIONS: Record<string, string> = {
+  "admin.inspector_approved": "Inspector approved",
+  "admin.inspector_rejected": "Inspector rejected",
+  "admin.prices_changed": "Prices changed",
+  "admin.rates_changed": "Rate table changed",
+  "admin.user_disabled": "Account disabled",
+  "admin.user_enabled": "Account enabled",
+  "admin.user_role_changed": "Role changed",
+  "auth.sign_in": "Signed in",
+  "auth.sign_in_failed": "Sign-in failed",
+  "auth.sign_up": "Signed up",
+  "disputes.opened": "Dispute opened",
+  "disputes.message": "Message about a dispute",
+  "disputes.closed": "Dispute closed",
+  "inspector.insurance_uploaded": "Insurance certificate uploaded",
+  "inspector.licence_expired": "Licence expired, verification withdrawn",
+  "inspector.profile_saved": "Inspector profile saved",
+  "payments.refund": "Refund",
+  "payments.event_refused": "Payment event refused",
+  "security.webhook_signature_rejected": "Webhook with a bad signature",
+};
