@@ -71,9 +71,9 @@ export async function frameAt(url: string, second: number): Promise<Blob | null>
   v.preload = "auto";
   v.src = url;
   try {
-    if (!(await once(v, "loadeddata", 8000))) return null;
+    if (!(await once(v, "loadeddata", 15_000))) return null;
     v.currentTime = second;
-    if (!(await once(v, "seeked", 8000))) return null;
+    if (!(await once(v, "seeked", 15_000))) return null;
     return await captureFrame(v);
   } finally {
     v.removeAttribute("src");
