@@ -10,6 +10,8 @@ export type ClipPlayerHandle = {
   seekTo: (second: number) => void;
   currentTime: () => number;
   pause: () => void;
+  /** The video element, for taking a still frame from what is on screen (only untainted with `corsReady`). */
+  element: () => HTMLVideoElement | null;
 };
 
 type Props = {
@@ -21,6 +23,8 @@ type Props = {
   /** Another way to seek: each new value moves the playhead there. */
   seekSecond?: number | null;
   onTimeUpdate?: (second: number) => void;
+  /** Ask storage for CORS so the frames can be drawn on a canvas (storage allows the app's origin). */
+  corsReady?: boolean;
   ref?: Ref<ClipPlayerHandle>;
   className?: string;
 };
@@ -37,7 +41,7 @@ async function playbackUrl(clipId: string): Promise<{ url: string | null; error:
 }
 
 /** Plays a clip from its short-lived signed URL; when the URL expires mid-watch it fetches a new one and keeps the place. */
-export function ClipPlayer({ clipId, label, posterUrl, src, seekSecond, onTimeUpdate, ref, className }: Props) {
+export function ClipPlayer({ clipId, label, posterUrl, src, seekSecond, onTimeUpdate, corsReady, ref, className }: Props) {
   const video = useRef<HTMLVideoElement>(null);
   const [fetched, setFetched] = useState<string | null>(null);
   const url = fetched ?? src ?? null;
@@ -79,9 +83,16 @@ export function ClipPlayer({ clipId, label, posterUrl, src, seekSecond, onTimeUp
     }
   }, []);
 
-  useImperativeHandle(ref, () => ({ seekTo, currentTime: () => video.current?.currentTime ?? 0, pause: () => video.current?.pause() }), [
-    seekTo,
-  ]);
+  useImperativeHandle(
+    ref,
+    () => ({
+      seekTo,
+      currentTime: () => video.current?.currentTime ?? 0,
+      pause: () => video.current?.pause(),
+      element: () => video.current,
+    }),
+    [seekTo],
+  );
 
   useEffect(() => {
     if (seekSecond !== null && seekSecond !== undefined) seekTo(seekSecond);
@@ -102,6 +113,7 @@ export function ClipPlayer({ clipId, label, posterUrl, src, seekSecond, onTimeUp
         ref={video}
         src={url ?? undefined}
         poster={posterUrl ?? undefined}
+        crossOrigin={corsReady ? "anonymous" : undefined}
         controls
         playsInline
         preload="metadata"

@@ -11,9 +11,9 @@ import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
 import { DISPUTE_MESSAGE, DISPUTE_REASONS, outcomeLabel, reasonLabel, type DisputeDto } from "@/lib/disputes";
 import { formatDate } from "@/lib/format";
+import { postJson } from "@/lib/api/client";
 
 type Errors = { reason?: string; message?: string; form?: string };
-type ApiError = { error?: { message?: string; fieldErrors?: Record<string, string[]> } };
 
 /** Dispute a delivered report (to the admin, by e-mail), or see how the last dispute stands. */
 export function DisputePanel({ reportId, initial }: { reportId: string; initial: DisputeDto | null }) {
@@ -115,23 +115,10 @@ function DisputeForm({ reportId, onSent, onCancel }: { reportId: string; onSent:
     }
     setPending(true);
     setErrors({});
-    try {
-      const res = await fetch(`/api/reports/${reportId}/disputes`, {
-        method: "POST",
-        headers: { "content-type": "application/json", accept: "application/json" },
-        body: JSON.stringify({ reason, message: message.trim() }),
-      });
-      const data = (await res.json().catch(() => null)) as (DisputeDto & ApiError) | null;
-      if (res.ok && data?.id) return onSent(data);
-      const fe = data?.error?.fieldErrors ?? {};
-      setErrors({
-        reason: fe.reason?.[0],
-        message: fe.message?.[0],
-        form: data?.error?.message ?? "The dispute could not be sent. Please try again.",
-      });
-    } catch {
-      setErrors({ form: "Gradeline could not be reached. Check your connection and try again." });
-    }
+    const res = await postJson<DisputeDto>(`/api/reports/${reportId}/disputes`, { reason, message: message.trim() });
+    if (res.ok) return onSent(res.data);
+    const fe = res.error.fieldErrors ?? {};
+    setErrors({ reason: fe.reason?.[0], message: fe.message?.[0], form: res.error.message });
     setPending(false);
   }
 

@@ -2,6 +2,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import { appUrl, axeViolations, launchBrowser, signInThroughForm } from "../utils/browser";
+import { addLocate, openSection, recordProfile } from "../utils/workspace";
 
 const SECTIONS = ["clips", "access", "profile", "locates", "boundary", "findings", "narrative", "review"];
 
@@ -23,12 +24,6 @@ async function signedIn(viewport?: {
   });
   await signInThroughForm(page, "inspector@gradeline.test");
   return { context, page, problems };
-}
-
-async function openSection(page: Page, id: string) {
-  const header = page.locator(`#section-${id}`);
-  if ((await header.getAttribute("aria-expanded")) !== "true") await header.click();
-  await expect.poll(() => page.locator(`#panel-${id}`).isVisible()).toBe(true);
 }
 
 const saveStatus = (page: Page) => page.locator("[data-save-status]").getAttribute("data-save-status");
@@ -59,23 +54,12 @@ describe("the inspector's job workspace in Chromium", () => {
     await page.getByLabel("Cleanout inside").check();
     await page.getByLabel("Where it is").fill("Basement, behind the water heater");
 
-    await openSection(page, "profile");
-    await page.getByLabel("Survey ended at").fill("40");
-    await page.getByLabel("Reached the main").check();
-    await page.getByRole("button", { name: "Add the first segment" }).click();
-    await page.locator("#f-segments-0-to").fill("9");
-    await page.locator("#f-segments-0-material").selectOption("cast_iron");
-    await page.locator("#f-segments-0-diameterIn").selectOption("4");
-    await page.getByRole("button", { name: "Add a segment" }).click();
-    await page.locator("#f-segments-1-to").fill("40");
-    await page.locator("#f-segments-1-material").selectOption("vitrified_clay");
-    await page.locator("#f-segments-1-diameterIn").selectOption("4");
+    await recordProfile(page, "40", [
+      { to: "9", material: "cast_iron", diameterIn: "4" },
+      { to: "40", material: "vitrified_clay", diameterIn: "4" },
+    ]);
 
-    await openSection(page, "locates");
-    await page.getByRole("button", { name: "Add a locate mark" }).click();
-    await page.locator("#f-locates-0-at").fill("12");
-    await page.locator("#f-locates-0-depthFt").fill("3.2");
-    await page.locator("#f-locates-0-surface").selectOption("soil");
+    await addLocate(page, 0, { at: "12", depthFt: "3.2", surface: "soil" });
 
     const mark = page.locator('figure [role="button"][data-finding-index="0"]:visible');
     expect(await mark.count()).toBe(0);

@@ -7,6 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
+import { postJson } from "@/lib/api/client";
 
 export function DisputeActions({ disputeId }: { disputeId: string }) {
   const router = useRouter();
@@ -18,9 +19,8 @@ export function DisputeActions({ disputeId }: { disputeId: string }) {
 
   async function post(path: string, payload: unknown, done: string) {
     setStatus("Working…");
-    const res = await fetch(`/api/admin/disputes/${disputeId}/${path}`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(payload) });
-    const json = (await res.json().catch(() => ({}))) as { error?: { message?: string } };
-    setStatus(res.ok ? done : (json.error?.message ?? "That did not work. Try again."));
+    const res = await postJson(`/api/admin/disputes/${disputeId}/${path}`, payload);
+    setStatus(res.ok ? done : res.error.message);
     if (res.ok) router.refresh();
   }
 

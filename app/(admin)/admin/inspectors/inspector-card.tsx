@@ -14,7 +14,7 @@ import type { AdminInspectorDto, InspectorStatus } from "@/db/queries/admin-insp
 import { formatDate } from "@/lib/format";
 import { verifyInspectorSchema, type VerifyInspectorInput } from "@/lib/validations/admin";
 
-import { sendJson } from "../send-json";
+import { sendJson } from "@/lib/api/client";
 
 const STATUS: Record<InspectorStatus, { label: string; tone: BadgeTone }> = {
   awaiting: { label: "Waiting for verification", tone: "warning" },

@@ -7,7 +7,7 @@ import { Alert } from "@/components/ui/alert";
 import { EmptyState } from "@/components/ui/empty-state";
 import type { AdminInspectorDto } from "@/db/queries/admin-inspectors";
 
-import { getJson } from "../send-json";
+import { getJson } from "@/lib/api/client";
 import { InspectorCard } from "./inspector-card";
 
 type Filter = "queue" | "all";

@@ -8,8 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Checkbox } from "@/components/ui/checkbox";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
+import { postJson } from "@/lib/api/client";
 
-type ApiError = { error?: { message?: string; fieldErrors?: Record<string, string[]> } };
 
 export function RefundForm({ paymentId, remainingCents }: { paymentId: string; remainingCents: number }) {
   const router = useRouter();
@@ -37,16 +37,18 @@ export function RefundForm({ paymentId, remainingCents }: { paymentId: string; r
     if (!Number.isFinite(cents) || cents < 1) return setErrors({ amountCents: ["Enter an amount like 100.00."] });
     setBusy(true);
     setErrors({});
-    const res = await fetch(`/api/admin/payments/${paymentId}/refund`, {
-      method: "POST",
-      headers: { "Content-Type": "application/json" },
-      body: JSON.stringify({ amountCents: cents, reason, reverseTransfer: reverse, noReversalReason: reverse ? undefined : why, requestId }),
+    const res = await postJson(`/api/admin/payments/${paymentId}/refund`, {
+      amountCents: cents,
+      reason,
+      reverseTransfer: reverse,
+      noReversalReason: reverse ? undefined : why,
+      requestId,
     });
     setBusy(false);
     if (!res.ok) {
-      const body = (await res.json().catch(() => ({}))) as ApiError;
-      setErrors(body.error?.fieldErrors ?? {});
-      return setMessage({ tone: "danger", text: body.error?.message ?? "The refund failed. Nothing was refunded; try again." });
+      setErrors(res.error.fieldErrors ?? {});
+      // The request id is kept: sending the same refund again cannot refund twice.
+      return setMessage({ tone: "danger", text: res.error.message });
     }
     setMessage({ tone: "success", text: "Refund sent." });
     setRequestId(crypto.randomUUID());

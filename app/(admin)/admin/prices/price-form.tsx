@@ -14,7 +14,7 @@ import type { PriceVersionDto } from "@/db/queries/admin-prices";
 import type { Prices } from "@/lib/pricing-defaults";
 import { priceVersionSchema, type PriceVersionInput } from "@/lib/validations/admin";
 
-import { sendJson } from "../send-json";
+import { sendJson } from "@/lib/api/client";
 import { ScaledInput } from "./scaled-input";
 
 export type PricesData = { current: Prices & { id: string | null }; history: PriceVersionDto[] };

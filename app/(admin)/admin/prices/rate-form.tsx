@@ -18,7 +18,7 @@ import { METHOD_LABELS } from "@/lib/engine/repair";
 import { SURFACE_LABELS, SURFACES } from "@/lib/engine/vocabulary";
 import { rateVersionSchema, type RateVersionInput } from "@/lib/validations/admin";
 
-import { sendJson } from "../send-json";
+import { sendJson } from "@/lib/api/client";
 import { ScaledInput } from "./scaled-input";
 
 export type RatesData = { current: { id: string; table: RateTable }; history: RateVersionDto[] };

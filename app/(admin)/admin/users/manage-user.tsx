@@ -16,7 +16,7 @@ import type { Role } from "@/db/schema";
 import { ROLE_LABEL } from "@/lib/auth/permissions";
 import { updateUserSchema, type UpdateUserInput } from "@/lib/validations/admin";
 
-import { sendJson } from "../send-json";
+import { sendJson } from "@/lib/api/client";
 
 type Changed = (user: AdminUserDto, message: string) => void;
 

@@ -14,7 +14,7 @@ import type { AdminUserDto, AdminUserPage } from "@/db/queries/admin-users";
 import { ROLE_LABEL } from "@/lib/auth/permissions";
 import { formatDate } from "@/lib/format";
 
-import { getJson } from "../send-json";
+import { getJson } from "@/lib/api/client";
 import { ManageUser } from "./manage-user";
 
 type Query = { q: string; role: string; status: string };

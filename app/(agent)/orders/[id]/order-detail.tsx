@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useRef, useState, type FormEvent, type ReactNode } from "react";
+import { useId, useRef, useState, type FormEvent } from "react";
 import useSWR from "swr";
 
 import { Countdown, useNow } from "@/components/countdown";
@@ -16,6 +16,7 @@ import { formatDateTime } from "@/lib/format";
 import type { OrderDetailDto, OrderDto } from "@/lib/orders/dto";
 import { formatTimeRange } from "@/lib/time-zones";
 import { getJson, postJson } from "@/lib/api/client";
+import { DetailRow } from "@/components/ui/detail-row";
 
 
 const INVITATION_TEXT: Record<OrderDto["buyer"]["invitation"], { label: string; tone: "neutral" | "teal" | "success"; note: string }> = {
@@ -23,15 +24,6 @@ const INVITATION_TEXT: Record<OrderDto["buyer"]["invitation"], { label: string; 
   invited: { label: "Invited", tone: "teal", note: "The buyer has the invitation e-mail and can unlock the report." },
   joined: { label: "Joined", tone: "success", note: "The buyer has an account and can see the report." },
 };
-
-function Row({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <div className="grid gap-0.5 py-2 sm:grid-cols-[11rem_1fr] sm:gap-4">
-      <dt className="text-sm text-ink-2">{label}</dt>
-      <dd className="text-[0.9375rem] text-ink">{children}</dd>
-    </div>
-  );
-}
 
 /** Wording for the order's fixed answers, looked up on the server (keeps zod out of this bundle). */
 export type OrderLabels = { propertyType: string; occupancy: string };
@@ -138,21 +130,21 @@ export function OrderDetail({ initial, labels }: { initial: OrderDetailDto; labe
             <CardHeader title="Order details" />
             <CardBody>
               <dl className="divide-y divide-rule">
-                <Row label="Property">
+                <DetailRow label="Property">
                   {labels.propertyType}
                   {order.yearBuilt ? <>, built <span className="num">{order.yearBuilt}</span></> : null}
-                </Row>
-                <Row label="Occupancy">{labels.occupancy}</Row>
-                <Row label="Access">{order.accessNotes}</Row>
-                <Row label="Cleanout">{order.cleanoutKnown ? (order.cleanoutNote ?? "Known") : "None known: toilet pull or roof vent"}</Row>
-                <Row label="Building sewers">
+                </DetailRow>
+                <DetailRow label="Occupancy">{labels.occupancy}</DetailRow>
+                <DetailRow label="Access">{order.accessNotes}</DetailRow>
+                <DetailRow label="Cleanout">{order.cleanoutKnown ? (order.cleanoutNote ?? "Known") : "None known: toilet pull or roof vent"}</DetailRow>
+                <DetailRow label="Building sewers">
                   <span className="num">{order.buildingSewers}</span>
-                </Row>
-                {order.listingRef ? <Row label="Listing reference">{order.listingRef}</Row> : null}
-                {order.notes ? <Row label="Notes">{order.notes}</Row> : null}
-                <Row label="Ordered">
+                </DetailRow>
+                {order.listingRef ? <DetailRow label="Listing reference">{order.listingRef}</DetailRow> : null}
+                {order.notes ? <DetailRow label="Notes">{order.notes}</DetailRow> : null}
+                <DetailRow label="Ordered">
                   <span className="num">{formatDateTime(order.createdAt, tz)}</span>
-                </Row>
+                </DetailRow>
               </dl>
             </CardBody>
           </Card>

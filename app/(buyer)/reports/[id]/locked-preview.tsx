@@ -1,4 +1,3 @@
-import type { ReactNode } from "react";
 
 import { dateText, ftNumber } from "@/components/report/report-text";
 import { Alert } from "@/components/ui/alert";
@@ -9,15 +8,7 @@ import { UNLOCK_INCLUDES, type ReportPreview } from "@/lib/reports/dto";
 
 import { ConfirmingPayment } from "./confirming-payment";
 import { UnlockButton } from "./unlock-button";
-
-function Row({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <div className="grid gap-0.5 py-2.5 sm:grid-cols-[10rem_1fr] sm:gap-4">
-      <dt className="text-ink-2 text-sm">{label}</dt>
-      <dd className="text-ink">{children}</dd>
-    </div>
-  );
-}
+import { DetailRow } from "@/components/ui/detail-row";
 
 type PaymentState = "confirming" | "not-completed" | "refunded" | null;
 
@@ -59,13 +50,13 @@ export function LockedPreview({ preview, returnedPaid, cancelled }: { preview: R
           />
           <CardBody>
             <dl className="divide-rule divide-y">
-              <Row label="Visit">{visited ? <span className="num">{visited}</span> : "Date not recorded"}</Row>
+              <DetailRow label="Visit">{visited ? <span className="num">{visited}</span> : "Date not recorded"}</DetailRow>
               {delivered ? (
-                <Row label="Delivered">
+                <DetailRow label="Delivered">
                   <span className="num">{delivered}</span>
-                </Row>
+                </DetailRow>
               ) : null}
-              <Row label="Inspector">
+              <DetailRow label="Inspector">
                 {inspector ? (
                   <>
                     {inspector.name}
@@ -74,12 +65,12 @@ export function LockedPreview({ preview, returnedPaid, cancelled }: { preview: R
                 ) : (
                   "Not recorded"
                 )}
-              </Row>
-              <Row label="Licence">{inspector?.licenceNumber ? <span className="num">{inspector.licenceNumber}</span> : "Not on file"}</Row>
-              <Row label="Clips">
+              </DetailRow>
+              <DetailRow label="Licence">{inspector?.licenceNumber ? <span className="num">{inspector.licenceNumber}</span> : "Not on file"}</DetailRow>
+              <DetailRow label="Clips">
                 <span className="num">{preview.clipCount}</span> video {preview.clipCount === 1 ? "clip" : "clips"}
-              </Row>
-              <Row label="Line surveyed">
+              </DetailRow>
+              <DetailRow label="Line surveyed">
                 {preview.surveyedFt !== null ? (
                   <>
                     <span className="num">{ftNumber(preview.surveyedFt)}</span> ft
@@ -87,7 +78,7 @@ export function LockedPreview({ preview, returnedPaid, cancelled }: { preview: R
                 ) : (
                   "Not recorded"
                 )}
-              </Row>
+              </DetailRow>
             </dl>
           </CardBody>
         </Card>

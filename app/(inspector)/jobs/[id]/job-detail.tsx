@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useRef, useState, type FormEvent, type ReactNode } from "react";
+import { useId, useRef, useState, type FormEvent } from "react";
 import useSWR from "swr";
 
 import { Countdown, useNow } from "@/components/countdown";
@@ -17,6 +17,7 @@ import { formatDateTime } from "@/lib/format";
 import type { JobDto, OrderEventDto, ProposalDto } from "@/lib/orders/dto";
 import { formatTimeRange, isoToZonedLocal, zonedLocalToIso } from "@/lib/time-zones";
 import { getJson, postJson } from "@/lib/api/client";
+import { DetailRow } from "@/components/ui/detail-row";
 
 export type JobDetailData = { job: JobDto; proposals: ProposalDto[]; events: OrderEventDto[] };
 type Slot = { key: number; date: string; from: string; to: string };
@@ -49,15 +50,6 @@ function checkSlot(slot: Slot, job: JobDto): { start?: string; end?: string; iso
   if (e > Date.parse(job.deadline)) return { end: "This visit would end after the contingency deadline." };
   if (!job.visitWindows.some((w) => s >= Date.parse(w.start) && e <= Date.parse(w.end))) return { start: "Keep the visit inside one of the agent's windows." };
   return { iso: { start, end } };
-}
-
-function Detail({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <div className="grid gap-0.5 py-2 sm:grid-cols-[10rem_1fr] sm:gap-4">
-      <dt className="text-sm text-ink-2">{label}</dt>
-      <dd className="text-[0.9375rem]">{children}</dd>
-    </div>
-  );
 }
 
 /** Wording for the job's fixed answers, looked up on the server (keeps zod out of this bundle). */
@@ -147,18 +139,18 @@ export function JobDetail({ initial, inspectorId, labels }: { initial: JobDetail
             <CardHeader title="The job" />
             <CardBody>
               <dl className="divide-y divide-rule">
-                <Detail label="Access">{job.accessNotes}</Detail>
-                <Detail label="Cleanout">{job.cleanoutKnown ? (job.cleanoutNote ?? "Known") : "None known: pull a toilet or use a roof vent"}</Detail>
-                <Detail label="Property">
+                <DetailRow label="Access">{job.accessNotes}</DetailRow>
+                <DetailRow label="Cleanout">{job.cleanoutKnown ? (job.cleanoutNote ?? "Known") : "None known: pull a toilet or use a roof vent"}</DetailRow>
+                <DetailRow label="Property">
                   {labels.propertyType}
                   {job.yearBuilt ? <>, built <span className="num">{job.yearBuilt}</span></> : null}
-                </Detail>
-                <Detail label="Occupancy">{labels.occupancy}</Detail>
-                <Detail label="Building sewers">
+                </DetailRow>
+                <DetailRow label="Occupancy">{labels.occupancy}</DetailRow>
+                <DetailRow label="Building sewers">
                   <span className="num">{job.buildingSewers}</span>
-                </Detail>
-                <Detail label="Buyer">{job.buyerName}</Detail>
-                {job.notes ? <Detail label="Notes">{job.notes}</Detail> : null}
+                </DetailRow>
+                <DetailRow label="Buyer">{job.buyerName}</DetailRow>
+                {job.notes ? <DetailRow label="Notes">{job.notes}</DetailRow> : null}
               </dl>
             </CardBody>
           </Card>

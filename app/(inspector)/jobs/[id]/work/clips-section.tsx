@@ -11,7 +11,7 @@ import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 
 import { proposeFootage } from "./problem-fields";
-import { frameAt } from "./still-frame";
+import { captureFrame, frameAt } from "./still-frame";
 import type { ClipStatus, ClipSummary } from "./use-clips";
 
 const STATUS: Record<ClipStatus, { label: string; tone: BadgeTone }> = {
@@ -135,9 +135,15 @@ function ClipViewer({ clip, onAddFinding }: { clip: ClipSummary; onAddFinding: (
     const at = player.current?.currentTime() ?? second;
     player.current?.pause();
     setBusy(true);
-    // A freshly signed URL: the player's own request is cached without CORS headers, and reusing it would taint the canvas.
-    const fresh = await signedUrl(clip.id);
-    const still = fresh ? await frameAt(fresh, at) : null;
+    // The player asks storage for CORS, so the frame on screen can be drawn as it is. If it cannot
+    // (no decoded frame yet), a separate element loads a freshly signed URL and seeks there.
+    const shown = player.current?.element();
+    let still = shown && shown.readyState >= 2 && !shown.seeking ? await captureFrame(shown) : null;
+    if (!still) {
+      console.warn("Still frame: the frame on screen could not be drawn; loading the clip again.");
+      const fresh = await signedUrl(clip.id);
+      still = fresh ? await frameAt(fresh, at) : null;
+    }
     setBusy(false);
     const rounded = Math.round(at * 10) / 10;
     onAddFinding({ clip, second: rounded, footage: proposeFootage(clip.startFootage, at, speed), speed, still });
@@ -147,7 +153,7 @@ function ClipViewer({ clip, onAddFinding }: { clip: ClipSummary; onAddFinding: (
     <div className="border-rule space-y-3 rounded-md border bg-white p-3">
       <h3 className="font-sans text-[0.9375rem] font-semibold">{clip.label}</h3>
       {url ? (
-        <ClipPlayer ref={player} clipId={clip.id} label={clip.label} posterUrl={clip.posterUrl} src={url.src} onTimeUpdate={setSecond} />
+        <ClipPlayer ref={player} clipId={clip.id} label={clip.label} posterUrl={clip.posterUrl} src={url.src} onTimeUpdate={setSecond} corsReady />
       ) : (
         <div className="bg-paper-2 text-ink-2 flex aspect-video w-full items-center justify-center rounded-sm text-sm">
           Loading the clip…

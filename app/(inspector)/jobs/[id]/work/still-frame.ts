@@ -1,5 +1,7 @@
 "use client";
 
+import { postJson } from "@/lib/api/client";
+
 /** The frame under the playhead as a JPEG, or null when the browser will not share it (a clip served without CORS). */
 export async function captureFrame(video: HTMLVideoElement, maxWidth = 1280): Promise<Blob | null> {
   const w = video.videoWidth;
@@ -19,20 +21,15 @@ export async function captureFrame(video: HTMLVideoElement, maxWidth = 1280): Pr
   }
 }
 
-async function postJson<T>(url: string, body?: unknown): Promise<T> {
-  const res = await fetch(url, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const data: unknown = await res.json().catch(() => null);
-  if (!res.ok) throw new Error((data as { error?: { message?: string } } | null)?.error?.message ?? "The still frame could not be stored.");
-  return data as T;
+async function post<T>(url: string, body?: unknown): Promise<T> {
+  const res = await postJson<T>(url, body);
+  if (!res.ok) throw new Error(res.error.message);
+  return res.data;
 }
 
 /** Stores a still beside its clip: ask for an upload URL, send the bytes straight to storage, confirm. */
 export async function uploadStill(jobId: string, still: Blob, clipId: string, second: number): Promise<string> {
-  const { stillId, uploadUrl } = await postJson<{ stillId: string; uploadUrl: string }>(`/api/jobs/${jobId}/stills`, {
+  const { stillId, uploadUrl } = await post<{ stillId: string; uploadUrl: string }>(`/api/jobs/${jobId}/stills`, {
     clipId,
     second,
     contentType: "image/jpeg",
@@ -40,7 +37,7 @@ export async function uploadStill(jobId: string, still: Blob, clipId: string, se
   });
   const put = await fetch(uploadUrl, { method: "PUT", headers: { "content-type": "image/jpeg" }, body: still });
   if (!put.ok) throw new Error("The still frame could not be uploaded.");
-  await postJson(`/api/stills/${stillId}/complete`);
+  await post(`/api/stills/${stillId}/complete`);
   return stillId;
 }
 
@@ -59,6 +56,11 @@ function once(target: HTMLVideoElement, event: string, ms: number): Promise<bool
   });
 }
 
+function giveUp(why: string, v: HTMLVideoElement): null {
+  console.warn(`Still frame: ${why} (network state ${v.networkState}, ready state ${v.readyState}, error ${v.error?.code ?? "none"}).`);
+  return null;
+}
+
 /**
  * The frame at a second of a clip, read through a separate CORS-enabled video element so the
  * canvas is not tainted (the player on screen does not ask storage for CORS).
@@ -71,10 +73,10 @@ export async function frameAt(url: string, second: number): Promise<Blob | null>
   v.preload = "auto";
   v.src = url;
   try {
-    if (!(await once(v, "loadeddata", 15_000))) return null;
+    if (!(await once(v, "loadeddata", 15_000))) return giveUp("the clip did not load", v);
     v.currentTime = second;
-    if (!(await once(v, "seeked", 15_000))) return null;
-    return await captureFrame(v);
+    if (!(await once(v, "seeked", 15_000))) return giveUp("the clip did not seek", v);
+    return (await captureFrame(v)) ?? giveUp("the frame could not be drawn", v);
   } finally {
     v.removeAttribute("src");
     v.load();
