@@ -4,14 +4,13 @@ import { eq } from "drizzle-orm";
 
 import { hashPassword } from "@/lib/auth/password";
 import { DEMO_TOWN, DEMO_USERS, demoOrders } from "@/lib/demo-world";
-
-import { getDb } from "./client";
-import { seedDemoReports } from "./seed-reports";
 import { DEFAULT_PRICES } from "@/lib/pricing-defaults";
 
+import { getDb } from "./client";
 import { listingAddressKey } from "./queries/order-commands";
 import { DEFAULT_MARKET } from "./queries/prices";
-import { inspectorProfiles, listings, orderEvents, orders, type OrderStatus, priceSettings, serviceAreas, users } from "./schema";
+import { inspectorProfiles, listings, orderEvents, orders, priceSettings, serviceAreas, users, type OrderStatus } from "./schema";
+import { seedDemoReports } from "./seed-reports";
 
 export const DEMO_PASSWORD = "gradeline-demo";
 
@@ -24,6 +23,25 @@ const PATHS: Record<OrderStatus, OrderStatus[]> = {
   cancelled: ["open", "cancelled"],
   refunded: ["open", "accepted", "scheduled", "delivered", "unlocked", "refunded"],
 };
+
+const HOUR = 3_600_000;
+const DAY = 24 * HOUR;
+
+/** When each step of a demo order happened: an hour apart at first, delivery at the visit's end, a day between later steps, never after now. */
+function stepTimes(o: { status: OrderStatus; createdAt: Date; appointment?: { end: Date } }, now: Date): Map<OrderStatus, Date> {
+  const created = o.createdAt.getTime();
+  const delivered = o.appointment?.end.getTime() ?? created + 3 * HOUR;
+  const at: Record<OrderStatus, number> = {
+    open: created,
+    accepted: created + HOUR,
+    scheduled: created + 2 * HOUR,
+    delivered,
+    unlocked: delivered + DAY,
+    refunded: delivered + 2 * DAY,
+    cancelled: created + DAY,
+  };
+  return new Map(PATHS[o.status].map((step) => [step, new Date(Math.min(at[step], now.getTime()))]));
+}
 
 /** Seeds the invented demo world once; running it again changes nothing. */
 export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean }> {
@@ -49,14 +67,22 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
           licenceNumber: u.inspector.licence,
           licenceExpiresOn: u.inspector.licenceExpiresOn,
           baseLocation: u.inspector.base,
-          availability: { mon: [{ start: "08:00", end: "17:00" }], tue: [{ start: "08:00", end: "17:00" }], wed: [{ start: "08:00", end: "17:00" }], thu: [{ start: "08:00", end: "17:00" }], fri: [{ start: "08:00", end: "15:00" }] },
+          availability: {
+            mon: [{ start: "08:00", end: "17:00" }],
+            tue: [{ start: "08:00", end: "17:00" }],
+            wed: [{ start: "08:00", end: "17:00" }],
+            thu: [{ start: "08:00", end: "17:00" }],
+            fri: [{ start: "08:00", end: "15:00" }],
+          },
           verifiedAt: u.inspector.verified ? now : null,
         });
         for (const postalCode of u.inspector.postalCodes) await tx.insert(serviceAreas).values({ inspectorId: row.id, postalCode });
       }
     }
     const admin = ids.get("admin@gradeline.test")!;
-    await tx.insert(priceSettings).values({ market: DEFAULT_MARKET, ...DEFAULT_PRICES, sourceNote: "Demo market opening prices (invented).", createdBy: admin });
+    await tx
+      .insert(priceSettings)
+      .values({ market: DEFAULT_MARKET, ...DEFAULT_PRICES, sourceNote: "Demo market opening prices (invented).", createdBy: admin });
 
     for (const o of demoOrders(now)) {
       const [listing] = await tx
@@ -73,6 +99,7 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
         .returning({ id: listings.id });
       const agentId = ids.get(o.agent)!;
       const inspectorId = o.inspector ? ids.get(o.inspector)! : null;
+      const times = stepTimes(o, now);
       const [order] = await tx
         .insert(orders)
         .values({
@@ -96,24 +123,31 @@ export async function seedDemoWorld(now = new Date()): Promise<{ seeded: boolean
           priceLines: o.priceLines,
           appointmentStart: o.appointment?.start ?? null,
           appointmentEnd: o.appointment?.end ?? null,
-          acceptedAt: inspectorId ? o.createdAt : null,
-          deliveredAt: ["delivered", "unlocked", "refunded"].includes(o.status) ? o.appointment?.end ?? null : null,
-          unlockedAt: ["unlocked", "refunded"].includes(o.status) ? now : null,
-          cancelledAt: o.status === "cancelled" ? now : null,
+          acceptedAt: times.get("accepted") ?? null,
+          deliveredAt: times.get("delivered") ?? null,
+          unlockedAt: times.get("unlocked") ?? null,
+          cancelledAt: times.get("cancelled") ?? null,
           createdAt: o.createdAt,
         })
         .returning({ id: orders.id });
       const path = PATHS[o.status];
       for (let i = 0; i < path.length; i++) {
         const to = path[i];
-        const actor = to === "open" || to === "cancelled" || to === "scheduled" ? agentId : to === "unlocked" ? ids.get(o.buyer.email) ?? null : to === "refunded" ? admin : inspectorId;
+        const actor =
+          to === "open" || to === "cancelled" || to === "scheduled"
+            ? agentId
+            : to === "unlocked"
+              ? (ids.get(o.buyer.email) ?? null)
+              : to === "refunded"
+                ? admin
+                : inspectorId;
         await tx.insert(orderEvents).values({
           orderId: order.id,
           fromStatus: i === 0 ? null : path[i - 1],
           toStatus: to,
           actorId: actor,
           reason: to === "cancelled" ? "Buyer withdrew the offer." : to === "refunded" ? "Duplicate payment by the buyer (demo)." : null,
-          at: new Date(o.createdAt.getTime() + i * 3_600_000),
+          at: times.get(to)!,
         });
       }
     }

@@ -21,6 +21,7 @@ export function navFor(role: Role, opts: { mailbox: boolean }): NavItem[] {
     case "admin":
       return [
         { href: "/admin", label: "Overview" },
+        { href: "/admin/orders", label: "Orders" },
         { href: "/admin/inspectors", label: "Inspectors" },
         { href: "/admin/payments", label: "Payments" },
         { href: "/admin/disputes", label: "Disputes" },

@@ -39,11 +39,7 @@ export async function getAdminOrder(orderId: string) {
       .leftJoin(payouts, eq(payouts.paymentId, payments.id))
       .where(eq(payments.orderId, orderId))
       .orderBy(asc(payments.createdAt)),
-    db
-      .select()
-      .from(ledgerEntries)
-      .where(eq(ledgerEntries.orderId, orderId))
-      .orderBy(asc(ledgerEntries.createdAt), asc(ledgerEntries.kind)),
+    db.select().from(ledgerEntries).where(eq(ledgerEntries.orderId, orderId)).orderBy(asc(ledgerEntries.createdAt)),
     db
       .select({ d: disputes, openerName: users.name, openerEmail: users.email })
       .from(disputes)
@@ -52,6 +48,10 @@ export async function getAdminOrder(orderId: string) {
       .orderBy(asc(disputes.createdAt)),
     ledgerBalance(orderId),
   ]);
+  // Entries booked together share a timestamp: show them in the order money moves.
+  const rank = (l: (typeof ledger)[number]) =>
+    ({ charge: 0, fee: l.amountCents >= 0 ? 1 : 4, transfer: 2, refund: 3, reversal: 5 })[l.kind];
+  ledger.sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime() || rank(a) - rank(b));
   const disputeIds = disputeRows.map((r) => r.d.id);
   const paymentIds = paymentRows.map((r) => r.payment.id);
   const targets: SQL[] = [

@@ -5,7 +5,10 @@ import { appUrl, axeViolations, launchBrowser, signInThroughForm } from "../util
 
 const PAGES = [
   { path: "/admin", heading: "Marketplace overview" },
+  { path: "/admin/orders", heading: "Orders" },
   { path: "/admin/inspectors", heading: "Inspectors" },
+  { path: "/admin/payments", heading: "Payments and refunds" },
+  { path: "/admin/disputes", heading: "Disputes" },
   { path: "/admin/prices", heading: "Prices and rates" },
   { path: "/admin/users", heading: "Users" },
   { path: "/admin/audit", heading: "Audit log" },
@@ -61,6 +64,33 @@ describe("the admin in the browser", () => {
     for (const p of PAGES) expect((await page.goto(appUrl(p.path)))?.status(), p.path).toBe(404);
     expect((await page.request.get(appUrl("/api/admin/users"))).status()).toBe(404);
   });
+
+  it(
+    "lists every agent's orders, finds one by address and opens its admin page, with Orders marked current",
+    { timeout: 90_000 },
+    async () => {
+      const page = await newPage();
+      await signInThroughForm(page, "admin@gradeline.test");
+      await page.goto(appUrl("/admin/orders"));
+      const table = page.getByRole("table", { name: /Every order/ });
+      // Orders from agent (14 Millrace Lane), agent2 (203 Tannery Row) and agent3 (9 Lantern Street) are all here.
+      for (const street of ["14 Millrace Lane", "203 Tannery Row", "9 Lantern Street"]) {
+        await expect.poll(() => table.getByRole("link", { name: street, exact: true }).count(), { timeout: 15_000 }).toBe(1);
+      }
+      await page.getByLabel("Search by address").fill("Cooper's Ford");
+      await expect.poll(() => table.getByRole("row").count()).toBe(2);
+      expect(await page.getByRole("status").textContent()).toContain("1 order match");
+      await table.getByRole("link", { name: "260 Cooper's Ford Road" }).click();
+      await page.waitForURL(/\/admin\/orders\/[0-9a-f-]{36}$/);
+      await page.getByRole("heading", { level: 1, name: "260 Cooper's Ford Road" }).waitFor();
+      const nav = page.getByRole("navigation", { name: "Main" });
+      expect(await nav.getByRole("link", { name: "Orders", exact: true }).getAttribute("aria-current")).toBe("page");
+      expect(await nav.getByRole("link", { name: "Overview", exact: true }).getAttribute("aria-current")).toBeNull();
+      await page.locator("main a[href='/admin/orders']").click();
+      await page.waitForURL((url) => url.pathname === "/admin/orders");
+      expect(await axeViolations(page)).toEqual([]);
+    },
+  );
 
   it(
     "a rejection needs a reason, announced beside the field; approving inspector4 opens their job board",

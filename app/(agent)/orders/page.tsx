@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 
+import { OrdersTable } from "@/components/orders-table";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireUser } from "@/lib/auth/session";
 
-import { OrdersTable } from "./orders-table";
 
 export const metadata: Metadata = { title: "Orders" };
 

@@ -26,7 +26,7 @@ export default async function AdminOrderPage({ params }: { params: Promise<{ id:
   return (
     <>
       <PageHeader
-        back={{ href: "/admin", label: "Overview" }}
+        back={{ href: "/admin/orders", label: "Orders" }}
         eyebrow="Order"
         title={`${address.street}${address.unit ? `, ${address.unit}` : ""}`}
         description={`${address.city}, ${address.state} ${address.postalCode}`}

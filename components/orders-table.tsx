@@ -24,6 +24,7 @@ import { Money } from "@/components/ui/money";
 import { Select } from "@/components/ui/select";
 import { Skeleton } from "@/components/ui/skeleton";
 import { ORDER_STATUS_LABELS, StatusBadge, type OrderStatus } from "@/components/ui/status-badge";
+import { getJson } from "@/lib/api/client";
 import { formatDate, formatDateTime } from "@/lib/format";
 import type { OrderDto, OrderListDto } from "@/lib/orders/dto";
 
@@ -43,7 +44,7 @@ const columns = col.columns([
   col.accessor((o) => o.address.street, {
     id: "address",
     header: "Listing",
-    cell: ({ row }) => <ListingCell order={row.original} />,
+    cell: ({ row, table }) => <ListingCell order={row.original} scope={(table.options.meta as { scope: OrdersScope }).scope} />,
   }),
   col.accessor("status", {
     id: "status",
@@ -60,31 +61,28 @@ const columns = col.columns([
   col.accessor("createdAt", {
     id: "created",
     header: "Ordered",
-    cell: ({ row }) => <span className="num text-sm whitespace-nowrap text-ink-2">{formatDate(row.original.createdAt, row.original.timeZone)}</span>,
+    cell: ({ row }) => (
+      <span className="num text-ink-2 text-sm whitespace-nowrap">{formatDate(row.original.createdAt, row.original.timeZone)}</span>
+    ),
   }),
   col.accessor("priceCents", { id: "price", header: "Price", cell: ({ row }) => <Money cents={row.original.priceCents} /> }),
 ]);
 
 const NO_ORDERS: OrderDto[] = [];
 
-async function getJson<T>(url: string): Promise<T> {
-  const res = await fetch(url, { headers: { accept: "application/json" } });
-  const data: unknown = await res.json().catch(() => null);
-  if (!res.ok) {
-    const message = (data as { error?: { message?: string } } | null)?.error?.message;
-    throw new Error(message ?? "The orders could not be loaded.");
-  }
-  return data as T;
-}
+/** Whose orders the table lists: the agent's own, or (for an admin) every order in the marketplace. */
+export type OrdersScope = "agent" | "admin";
 
-function ListingCell({ order }: { order: OrderDto }) {
+const detailHref = (scope: OrdersScope, id: string) => (scope === "admin" ? `/admin/orders/${id}` : `/orders/${id}`);
+
+function ListingCell({ order, scope }: { order: OrderDto; scope: OrdersScope }) {
   return (
     <div className="min-w-0">
-      <Link href={`/orders/${order.id}`} className="font-medium text-ink underline-offset-4 hover:text-teal hover:underline">
+      <Link href={detailHref(scope, order.id)} className="text-ink hover:text-teal font-medium underline-offset-4 hover:underline">
         {order.address.street}
         {order.address.unit ? `, ${order.address.unit}` : ""}
       </Link>
-      <p className="text-sm text-ink-2">
+      <p className="text-ink-2 text-sm">
         {order.address.city}, {order.address.state} <span className="num">{order.address.postalCode}</span>
         {order.listingRef ? <span> · Ref. {order.listingRef}</span> : null}
       </p>
@@ -93,11 +91,11 @@ function ListingCell({ order }: { order: OrderDto }) {
 }
 
 function DeadlineCell({ order }: { order: OrderDto }) {
-  if (!LIVE_STATES.has(order.status)) return <span className="num text-sm text-ink-2">{formatDate(order.deadline, order.timeZone)}</span>;
+  if (!LIVE_STATES.has(order.status)) return <span className="num text-ink-2 text-sm">{formatDate(order.deadline, order.timeZone)}</span>;
   return (
     <div>
       <Countdown to={order.deadline} timeZone={order.timeZone} />
-      <p className="num text-xs whitespace-nowrap text-ink-2" aria-hidden="true">
+      <p className="num text-ink-2 text-xs whitespace-nowrap" aria-hidden="true">
         {formatDateTime(order.deadline, order.timeZone)}
       </p>
     </div>
@@ -126,7 +124,7 @@ function SortIcon({ dir }: { dir: false | "asc" | "desc" }) {
   );
 }
 
-export function OrdersTable() {
+export function OrdersTable({ scope = "agent" }: { scope?: OrdersScope }) {
   const searchId = useId();
   const statusId = useId();
   const [search, setSearch] = useState("");
@@ -145,7 +143,7 @@ export function OrdersTable() {
   if (status) params.set("status", status);
   if (query) params.set("q", query.slice(0, 100));
 
-  const { data, error, isLoading, mutate } = useSWR<OrderListDto>(`/api/orders?${params}`, getJson, {
+  const { data, error, isLoading, mutate } = useSWR<OrderListDto>(`/api/orders?${params}`, (url: string) => getJson<OrderListDto>(url), {
     refreshInterval: 15_000,
     keepPreviousData: true,
   });
@@ -155,6 +153,7 @@ export function OrdersTable() {
     columns,
     data: data?.orders ?? NO_ORDERS,
     getRowId: (o) => o.id,
+    meta: { scope },
     state: { sorting, pagination },
     onSortingChange: (updater) => {
       setSorting(updater);
@@ -180,7 +179,7 @@ export function OrdersTable() {
     <div className="space-y-5">
       <div className="flex flex-col gap-3 sm:flex-row sm:items-end" role="search" aria-label="Find orders">
         <div className="flex-1 space-y-1.5">
-          <label htmlFor={searchId} className="text-sm font-medium text-ink">
+          <label htmlFor={searchId} className="text-ink text-sm font-medium">
             Search by address
           </label>
           <Input
@@ -188,7 +187,7 @@ export function OrdersTable() {
             type="search"
             value={search}
             maxLength={100}
-            placeholder="Street, city, postal code or reference"
+            placeholder={scope === "admin" ? "Address, reference or buyer" : "Street, city, postal code or reference"}
             onChange={(e) => {
               setSearch(e.target.value);
               resetPage();
@@ -196,7 +195,7 @@ export function OrdersTable() {
           />
         </div>
         <div className="space-y-1.5 sm:w-56">
-          <label htmlFor={statusId} className="text-sm font-medium text-ink">
+          <label htmlFor={statusId} className="text-ink text-sm font-medium">
             State
           </label>
           <Select
@@ -217,7 +216,7 @@ export function OrdersTable() {
           </Select>
         </div>
         <div className="md:hidden">
-          <label htmlFor={`${statusId}-sort`} className="mb-1.5 block text-sm font-medium text-ink">
+          <label htmlFor={`${statusId}-sort`} className="text-ink mb-1.5 block text-sm font-medium">
             Sort by
           </label>
           <Select
@@ -238,8 +237,10 @@ export function OrdersTable() {
         </div>
       </div>
 
-      <p role="status" className="text-sm text-ink-2">
-        {isLoading && !data ? "Loading orders…" : `${total} ${total === 1 ? "order" : "orders"}${filtered ? " match" : ""}${total > 0 ? `, showing ${first}–${last}` : ""}.`}
+      <p role="status" className="text-ink-2 text-sm">
+        {isLoading && !data
+          ? "Loading orders…"
+          : `${total} ${total === 1 ? "order" : "orders"}${filtered ? " match" : ""}${total > 0 ? `, showing ${first}–${last}` : ""}.`}
       </p>
 
       {error ? (
@@ -260,6 +261,8 @@ export function OrdersTable() {
       ) : data && rows.length === 0 ? (
         filtered ? (
           <EmptyState title="No orders match" description="Try another address or state, or clear the search." />
+        ) : scope === "admin" ? (
+          <EmptyState title="No orders yet" description="Orders placed by agents show up here." />
         ) : (
           <EmptyState
             title="No orders yet"
@@ -269,12 +272,14 @@ export function OrdersTable() {
         )
       ) : data ? (
         <>
-          <div className="hidden overflow-x-auto rounded-card border border-rule bg-white md:block">
+          <div className="rounded-card border-rule hidden overflow-x-auto border bg-white md:block">
             <table className="w-full border-collapse text-[0.9375rem]">
-              <caption className="sr-only">Your orders. Column headers with buttons sort the table.</caption>
+              <caption className="sr-only">
+                {scope === "admin" ? "Every order" : "Your orders"}. Column headers with buttons sort the table.
+              </caption>
               <thead>
                 {table.getHeaderGroups().map((group) => (
-                  <tr key={group.id} className="border-b border-rule bg-paper">
+                  <tr key={group.id} className="border-rule bg-paper border-b">
                     {group.headers.map((header) => {
                       const dir = header.column.getIsSorted();
                       const canSort = header.column.id !== "inspector";
@@ -284,7 +289,7 @@ export function OrdersTable() {
                           scope="col"
                           aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : undefined}
                           className={clsx(
-                            "px-4 py-2.5 text-xs font-semibold tracking-[0.06em] text-ink-2 uppercase",
+                            "text-ink-2 px-4 py-2.5 text-xs font-semibold tracking-[0.06em] uppercase",
                             header.column.id === "price" ? "text-right" : "text-left",
                           )}
                         >
@@ -292,7 +297,7 @@ export function OrdersTable() {
                             <button
                               type="button"
                               onClick={header.column.getToggleSortingHandler()}
-                              className="inline-flex items-center gap-1 rounded-sm uppercase hover:text-ink"
+                              className="hover:text-ink inline-flex items-center gap-1 rounded-sm uppercase"
                             >
                               <table.FlexRender header={header} />
                               <SortIcon dir={dir} />
@@ -306,11 +311,14 @@ export function OrdersTable() {
                   </tr>
                 ))}
               </thead>
-              <tbody className="divide-y divide-rule">
+              <tbody className="divide-rule divide-y">
                 {rows.map((row) => (
-                  <tr key={row.id} className={clsx("align-top hover:bg-paper/70", row.original.atRisk.flagged && "bg-danger-bg/40")}>
+                  <tr key={row.id} className={clsx("hover:bg-paper/70 align-top", row.original.atRisk.flagged && "bg-danger-bg/40")}>
                     {row.getAllCells().map((cell) => (
-                      <td key={cell.id} className={clsx("px-4 py-3", cell.column.id === "price" && "text-right", cell.column.id === "status" && "w-48")}>
+                      <td
+                        key={cell.id}
+                        className={clsx("px-4 py-3", cell.column.id === "price" && "text-right", cell.column.id === "status" && "w-48")}
+                      >
                         <table.FlexRender cell={cell} />
                       </td>
                     ))}
@@ -320,9 +328,9 @@ export function OrdersTable() {
             </table>
           </div>
 
-          <ul className="space-y-3 md:hidden" aria-label="Your orders">
+          <ul className="space-y-3 md:hidden" aria-label={scope === "admin" ? "Every order" : "Your orders"}>
             {rows.map((row) => (
-              <OrderCard key={row.id} order={row.original} />
+              <OrderCard key={row.id} order={row.original} scope={scope} />
             ))}
           </ul>
 
@@ -331,7 +339,7 @@ export function OrdersTable() {
               <Button variant="secondary" size="sm" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
                 <span aria-hidden="true">←</span> Previous
               </Button>
-              <span className="text-sm text-ink-2">
+              <span className="text-ink-2 text-sm">
                 Page <span className="num">{pagination.pageIndex + 1}</span> of <span className="num">{table.getPageCount()}</span>
               </span>
               <Button variant="secondary" size="sm" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
@@ -345,16 +353,16 @@ export function OrdersTable() {
   );
 }
 
-function OrderCard({ order }: { order: OrderDto }) {
+function OrderCard({ order, scope }: { order: OrderDto; scope: OrdersScope }) {
   return (
     <li
       className={clsx(
-        "rounded-card border bg-white px-4 py-3 shadow-card",
-        order.atRisk.flagged ? "border-[#efc2c7] border-l-4 border-l-danger" : "border-rule",
+        "rounded-card shadow-card border bg-white px-4 py-3",
+        order.atRisk.flagged ? "border-l-danger border-l-4 border-[#efc2c7]" : "border-rule",
       )}
     >
       <div className="flex items-start justify-between gap-3">
-        <ListingCell order={order} />
+        <ListingCell order={order} scope={scope} />
         <Money cents={order.priceCents} className="shrink-0 text-sm" />
       </div>
       <div className="mt-2 flex flex-wrap items-center gap-2">
@@ -369,7 +377,9 @@ function OrderCard({ order }: { order: OrderDto }) {
         <dt className="text-ink-2">Inspector</dt>
         <dd className="text-right">
           {order.inspector ? order.inspector.name : "Waiting"}
-          {order.appointment ? <span className="num block text-ink-2">{formatDateTime(order.appointment.start, order.timeZone)}</span> : null}
+          {order.appointment ? (
+            <span className="num text-ink-2 block">{formatDateTime(order.appointment.start, order.timeZone)}</span>
+          ) : null}
         </dd>
       </dl>
     </li>
