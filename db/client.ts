@@ -97,8 +97,21 @@ export async function closeDb(): Promise<void> {
   if (pending) await (await pending).close();
 }
 
-export async function dumpDataDir(): Promise<Blob> {
+export async function dumpDataDir(compression: "gzip" | "none" = "gzip"): Promise<Blob> {
   const h = await handle();
   if (!h.pglite) throw new Error("Backups of a PostgreSQL server are made with pg_dump, not this command.");
-  return h.pglite.dumpDataDir("gzip");
+  return h.pglite.dumpDataDir(compression);
+}
+
+/** Loads a dump made by dumpDataDir into an empty folder (restore); the app migrates it at its next start. */
+export async function loadDataDirInto(dir: string, dump: Uint8Array): Promise<{ tables: number }> {
+  fs.mkdirSync(path.dirname(dir), { recursive: true });
+  const client = await PGlite.create(dir, { loadDataDir: new Blob([Buffer.from(dump)]) });
+  try {
+    const { rows } = await client.query<{ n: number }>("select count(*)::int as n from information_schema.tables where table_schema = 'public'");
+    await client.query("CHECKPOINT");
+    return { tables: rows[0].n };
+  } finally {
+    await client.close();
+  }
 }

@@ -41,6 +41,10 @@ const envSchema = z
     AUTH_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(10),
     AUTH_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(100),
     AUTH_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(600),
+    UPLOAD_SIGN_LIMIT: z.coerce.number().int().positive().default(60),
+    UPLOAD_SIGN_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(60),
+    CHECKOUT_LIMIT: z.coerce.number().int().positive().default(10),
+    CHECKOUT_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(600),
   })
   .superRefine((env, ctx) => {
     const localMail = env.SMTP_HOST === "127.0.0.1" || env.SMTP_HOST === "localhost";

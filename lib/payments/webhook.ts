@@ -6,6 +6,7 @@ import type Stripe from "stripe";
 import { getDb, type Tx } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import { inspectorProfiles, ledgerEntries, payments, webhookEvents } from "@/db/schema";
+import { crashPoint } from "@/lib/crash-point";
 
 import { onCheckoutCompleted, onCheckoutExpired } from "./events/checkout-completed";
 import { sendWaitingPayouts } from "./payouts";
@@ -74,6 +75,7 @@ export async function handleStripeEvent(event: Stripe.Event): Promise<{ outcome:
   const effect = await db.transaction(async (tx): Promise<Effect> => {
     const [fresh] = await tx.insert(webhookEvents).values({ id: event.id, type: event.type, outcome: "processing" }).onConflictDoNothing({ target: webhookEvents.id }).returning({ id: webhookEvents.id });
     if (!fresh) return { outcome: "duplicate event" };
+    crashPoint(`webhook-recorded:${event.type}`);
     const result = await handler.run(tx, object as never);
     await tx.update(webhookEvents).set({ outcome: result.outcome }).where(eq(webhookEvents.id, event.id));
     return result;

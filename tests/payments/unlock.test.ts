@@ -110,6 +110,26 @@ describe("unlocking a report through the signed webhook", () => {
     expect((await state(r.id)).status).toBe("unlocked");
   });
 
+  it("a completed event that outruns its payment row is answered 503 and records nothing; delivered again once the row exists, it unlocks once", async () => {
+    // R2 in quality-targets.md: the final state equals what the provider reports, whatever the order of arrival.
+    const r = await paidReport();
+    const db = await getDb();
+    const [row] = await db.select().from(payments).where(eq(payments.orderId, r.id));
+    await db.delete(payments).where(eq(payments.id, row.id));
+    const [eventsBefore] = await db.select({ n: count() }).from(webhookEvents);
+    const early = await post(r.payload, signed(r.payload));
+    expect(early.status).toBe(503);
+    const [eventsAfter] = await db.select({ n: count() }).from(webhookEvents);
+    expect(eventsAfter.n).toBe(eventsBefore.n);
+    expect((await state(r.id)).status).toBe("delivered");
+
+    await db.insert(payments).values(row);
+    const again = await post(r.payload, signed(r.payload));
+    expect(again.status).toBe(200);
+    expect(again.json.outcome).toBe("unlocked");
+    expect(await state(r.id)).toMatchObject({ payments: 1, access: 1, ledger: 2, payouts: 1, status: "unlocked" });
+  });
+
   it("a declined card leaves the report locked and the buyer can try again", async () => {
     const world = await deliveredReport();
     const started = await call(checkout, { method: "POST", params: { id: world.id }, cookie: world.buyer.cookie });

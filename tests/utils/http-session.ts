@@ -11,12 +11,12 @@ function cookiesFrom(res: Response, jar: Map<string, string>) {
 
 export const cookieHeader = (jar: Map<string, string>) => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
 
-export async function signIn(email: string, password: string) {
+export async function signIn(email: string, password: string, url = base()) {
   const jar = new Map<string, string>();
-  const csrfRes = await fetch(`${base()}/api/auth/csrf`);
+  const csrfRes = await fetch(`${url}/api/auth/csrf`);
   cookiesFrom(csrfRes, jar);
   const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${base()}/api/auth/callback/credentials`, {
+  const res = await fetch(`${url}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
     headers: { "content-type": "application/x-www-form-urlencoded", cookie: cookieHeader(jar) },
@@ -27,8 +27,8 @@ export async function signIn(email: string, password: string) {
   return { res, jar, signedIn, cookie: cookieHeader(jar), csrfToken };
 }
 
-export async function signOut(jar: Map<string, string>, csrfToken: string) {
-  return fetch(`${base()}/api/auth/signout`, {
+export async function signOut(jar: Map<string, string>, csrfToken: string, url = base()) {
+  return fetch(`${url}/api/auth/signout`, {
     method: "POST",
     redirect: "manual",
     headers: { "content-type": "application/x-www-form-urlencoded", cookie: cookieHeader(jar) },

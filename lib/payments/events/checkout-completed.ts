@@ -11,6 +11,18 @@ import { renderMail } from "@/lib/mail/render";
 import { formatMoney } from "@/lib/money";
 
 /**
+ * A completed checkout whose payment row this database does not hold (yet: the event outran the
+ * commit that wrote it, or a restore went back in time). Nothing is recorded, the webhook answers
+ * 503 and the provider delivers the event again later.
+ */
+export class PaymentNotRecordedYet extends Error {
+  constructor(paymentId: string) {
+    super(`Checkout completed for payment ${paymentId}, which is not recorded here yet.`);
+    this.name = "PaymentNotRecordedYet";
+  }
+}
+
+/**
  * Records the payment, grants access, unlocks and queues the receipt, all inside the caller's
  * transaction (the same one that records the event id), so a replay changes nothing.
  */
@@ -19,7 +31,7 @@ export async function onCheckoutCompleted(tx: Tx, session: Stripe.Checkout.Sessi
   const paymentId = session.metadata?.paymentId;
   if (!paymentId) return "ignored: no payment id";
   const [payment] = await tx.select().from(payments).where(eq(payments.id, paymentId)).for("update").limit(1);
-  if (!payment) return "ignored: unknown payment";
+  if (!payment) throw new PaymentNotRecordedYet(paymentId);
   if (payment.status === "paid" || payment.status === "refunded" || payment.status === "partially_refunded") return "duplicate: already paid";
   if (session.amount_total !== payment.amountCents) return `refused: amount ${session.amount_total} differs from ${payment.amountCents}`;
 

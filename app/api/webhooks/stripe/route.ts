@@ -3,6 +3,7 @@ import { NextResponse, type NextRequest } from "next/server";
 
 import { recordAudit } from "@/db/queries/audit";
 import { clientAddress } from "@/lib/auth/options";
+import { PaymentNotRecordedYet } from "@/lib/payments/events/checkout-completed";
 import { handleStripeEvent } from "@/lib/payments/webhook";
 import { verifyWebhook } from "@/lib/payments/stripe";
 
@@ -19,6 +20,10 @@ export async function POST(req: NextRequest) {
     const { outcome } = await handleStripeEvent(event);
     return NextResponse.json({ received: true, outcome });
   } catch (error) {
+    if (error instanceof PaymentNotRecordedYet) {
+      console.warn(`[webhook] ${error.message} Asking the provider to send it again.`);
+      return NextResponse.json({ error: { code: "unavailable", message: "Not ready for this event yet; send it again." } }, { status: 503, headers: { "Retry-After": "30" } });
+    }
     console.error("[webhook] handling failed; the provider will retry", error);
     return NextResponse.json({ error: { code: "internal", message: "Try again." } }, { status: 500 });
   }

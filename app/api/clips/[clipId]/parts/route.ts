@@ -1,5 +1,6 @@
 // GET /api/clips/{clipId}/parts?from=&to= - the parts storage holds, and fresh URLs for the missing ones
 import { getClipForInspector, markClipAborted, touchClip } from "@/db/queries/clips";
+import { limitPerUser } from "@/lib/api/rate-limit";
 import { route } from "@/lib/api/route";
 import { AppError, notFound } from "@/lib/errors";
 import { headObject, listStoredParts, signPartUrls, UploadGoneError } from "@/lib/storage/multipart";
@@ -7,6 +8,7 @@ import { expectedPartBytes, missingParts, PARTS_PER_ANSWER } from "@/lib/uploads
 import { clipIdParams, partsQuerySchema } from "@/lib/validations/clips";
 
 export const GET = route({ permission: "jobs:work", params: clipIdParams, query: partsQuerySchema }, async ({ user, params, query }) => {
+  await limitPerUser("upload-sign", user.id);
   const found = await getClipForInspector(params.clipId, user.id);
   if (!found) throw notFound("That clip");
   const { clip } = found;

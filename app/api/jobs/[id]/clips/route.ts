@@ -1,5 +1,6 @@
 // POST /api/jobs/{id}/clips - start a clip upload straight to storage; GET - the job's clips
 import { getAssignedOrder, insertClip, listClipsForOrder, toClipView, WORKABLE_STATUSES } from "@/db/queries/clips";
+import { limitPerUser } from "@/lib/api/rate-limit";
 import { json, route } from "@/lib/api/route";
 import { AppError, notFound } from "@/lib/errors";
 import { objectKey } from "@/lib/storage/keys";
@@ -9,6 +10,7 @@ import { startClipSchema } from "@/lib/validations/clips";
 import { idParams } from "@/lib/validations/orders";
 
 export const POST = route({ permission: "jobs:work", params: idParams, body: startClipSchema }, async ({ user, params, body }) => {
+  await limitPerUser("upload-sign", user.id);
   const order = await getAssignedOrder(params.id, user.id);
   if (!order) throw notFound("That job");
   if (!WORKABLE_STATUSES.includes(order.status))
