@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import { pdfText } from "../utils/pdf-text";
 import { appUrl, axeViolations, launchBrowser, signInThroughForm } from "../utils/browser";
+import { activate, typeInto } from "../utils/keyboard";
 
 const STREET = "42 Sluice Gate Way";
 // Words that exist only in the unlocked report of this listing (its narrative, recommendation and
@@ -45,14 +46,15 @@ async function everythingServed(request: APIRequestContext) {
 
 const leaks = (texts: string[]) => SECRETS.filter((s) => texts.some((t) => t.includes(s)));
 
+/** Unlock and pay with the keyboard alone: Tab to each control, type, Enter. */
 async function pay(page: Page, card: string) {
-  await page.getByRole("button", { name: "Unlock the rated summary" }).click();
+  await activate(page, page.getByRole("button", { name: "Unlock the rated summary" }));
   await page.waitForURL((url) => url.pathname.startsWith("/pay/"), { timeout: 20_000 });
   expect(await axeViolations(page)).toEqual([]);
-  await page.getByLabel("Card number").fill(card);
-  await page.getByLabel("Expiry (MM / YY)").fill("12 / 34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
+  await typeInto(page, page.getByLabel("Card number"), card);
+  await typeInto(page, page.getByLabel("Expiry (MM / YY)"), "12 / 34");
+  await typeInto(page, page.getByLabel("CVC"), "123");
+  await activate(page, page.getByRole("button", { name: /^Pay / }));
 }
 
 beforeAll(async () => {
@@ -107,12 +109,12 @@ describe("the buyer's unlock and rated summary in Chromium", () => {
     await context.close();
   });
 
-  it("a declined card leaves the report locked and says so; the success card unlocks it once the provider confirms", async () => {
+  it("by keyboard alone: a declined card leaves the report locked and says so; the success card unlocks it once the provider confirms", async () => {
     const { context, page, problems } = await person("buyer@gradeline.test");
     await page.goto(appUrl(`/reports/${reportId}`));
     await pay(page, "4000 0000 0000 0002");
     await expect.poll(() => page.getByRole("alert").textContent(), { timeout: 10_000 }).toContain("Your card was declined.");
-    await page.getByRole("button", { name: "Cancel" }).click();
+    await activate(page, page.getByRole("button", { name: "Cancel" }));
     await page.waitForURL((url) => url.pathname === `/reports/${reportId}`);
     await expect.poll(() => page.getByText("Payment not completed").count()).toBe(1);
     expect(await page.getByText("Nothing was charged; the report is still locked.").count()).toBe(1);
