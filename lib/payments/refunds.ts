@@ -37,7 +37,7 @@ export async function bookRefund(tx: Tx, input: { paymentId: string; refundId: s
   await tx.update(payments).set({ refundedCents: refunded, status: full ? "refunded" : "partially_refunded" }).where(eq(payments.id, payment.id));
   if (payout && reversal > 0) {
     const reversed = payout.reversedCents + reversal;
-    await tx.update(payouts).set({ reversedCents: reversed, status: payout.status === "waiting" ? "waiting" : reversed >= payout.amountCents ? "reversed" : "partially_reversed" }).where(eq(payouts.id, payout.id));
+    await tx.update(payouts).set({ reversedCents: reversed, status: reversed >= payout.amountCents ? "reversed" : payout.status === "waiting" ? "waiting" : "partially_reversed" }).where(eq(payouts.id, payout.id));
   }
   if (full) {
     await tx.update(reportAccess).set({ revokedAt: new Date() }).where(and(eq(reportAccess.paymentId, payment.id), isNull(reportAccess.revokedAt)));

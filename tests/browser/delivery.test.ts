@@ -131,9 +131,9 @@ describe("field delivery in Chromium", () => {
     await expect.poll(() => ready.count(), { timeout: 180_000, interval: 250 }).toBeGreaterThan(0);
     const resent = parts.sent.slice(sentBeforeResume).filter((n) => storedBeforeReload.has(n));
     expect(resent).toEqual([]);
-    // The resume sent only what storage lacked (a part cut by the reload may still have landed, and is not sent either).
+    // The resume sent at most what storage lacked: parts in flight at the reload may still have landed
+    // (on a slow machine all of them can, and the resume then only completes), and are not sent again.
     const sentAfterResume = new Set(parts.sent.slice(sentBeforeResume));
-    expect(sentAfterResume.size).toBeGreaterThan(0);
     expect(sentAfterResume.size).toBeLessThanOrEqual(BIG_PARTS - storedBeforeReload.size);
     expect(await leftover.count()).toBe(0);
 

@@ -186,4 +186,76 @@ describe("money in the browser", () => {
       expect((await buyer.page.goto(`/admin/orders/${reportId}`))?.status()).toBe(404);
     },
   );
+
+  it(
+    "the next buyer of a listing unlocks its fresh report at the reuse price, the inspector's share waits for them, and a full refund locks it again",
+    { timeout: 150_000 },
+    async () => {
+      // 260 Cooper's Ford Road was filmed nine days ago by inspector (Theo Marsh) for buyer (Jordan Avery).
+      const REUSED = "260 Cooper's Ford Road";
+      const agent = await as("agent2@gradeline.test", /\/orders$/);
+      await agent.page.goto("/orders/new");
+      await agent.page.getByLabel("Street address", { exact: true }).fill(REUSED);
+      await agent.page.getByLabel("Postal code", { exact: true }).fill("97990");
+      const deadline = agent.page.getByRole("group", { name: "Inspection contingency deadline" });
+      await deadline.getByLabel("Date").fill(new Date(Date.now() + 6 * 86_400_000).toISOString().slice(0, 10));
+      await deadline.getByLabel("Time").fill("17:00");
+      const offer = agent.page.getByRole("region", { name: "This listing already has a fresh report" });
+      await offer.waitFor({ timeout: 15_000 });
+      const offerText = await offer.innerText();
+      expect(offerText).toContain("by Theo Marsh");
+      const reusePrice = offerText.match(/\$(\d+\.\d{2})/)![1];
+      expect(Number(reusePrice)).toBeLessThan(325);
+      await expectClean(agent.page, "order form with a reuse offer", agent.problems);
+
+      // Without the buyer's details nothing is ordered.
+      await offer.getByRole("button", { name: "Offer this report instead" }).click();
+      await agent.page.getByText("Enter the buyer's name and e-mail first").waitFor();
+      expect(agent.page.url()).toMatch(/\/orders\/new$/);
+      await agent.page.getByLabel("Buyer's name").fill("Kai Morrow");
+      await agent.page.getByLabel("Buyer's e-mail").fill("buyer2@gradeline.test");
+      await offer.getByRole("button", { name: "Offer this report instead" }).click();
+      await agent.page.waitForURL(/\/orders\/[0-9a-f-]{36}$/, { timeout: 20_000 });
+      const reuseId = agent.page.url().split("/").pop()!;
+      await agent.page.getByRole("heading", { level: 1, name: REUSED }).waitFor();
+      expect(await agent.page.locator("main").innerText()).toContain(`$${reusePrice}`);
+
+      const buyer = await as("buyer2@gradeline.test", /\/reports$/);
+      await buyer.page.goto(`/reports/${reuseId}`);
+      await buyer.page.getByRole("button", { name: "Unlock the rated summary" }).click();
+      await buyer.page.waitForURL(/\/pay\//);
+      await buyer.page.getByLabel("Card number").fill("4242 4242 4242 4242");
+      await buyer.page.getByLabel("Expiry (MM / YY)").fill("12 / 34");
+      await buyer.page.getByLabel("CVC").fill("123");
+      await buyer.page.getByRole("button", { name: `Pay $${reusePrice}` }).click();
+      await buyer.page.waitForURL((url) => url.pathname === `/reports/${reuseId}`);
+      await buyer.page.getByRole("link", { name: "Download PDF" }).waitFor({ timeout: 30_000 });
+      // The first buyer's name never reaches the next one.
+      expect(await buyer.page.content()).not.toContain("Jordan Avery");
+      await expectClean(buyer.page, "reused report, unlocked", buyer.problems);
+
+      const inspector = await as("inspector@gradeline.test", /\/jobs$/);
+      await inspector.page.goto("/earnings");
+      const rows = inspector.page.getByRole("table", { name: "Every job" }).getByRole("row", { name: new RegExp(REUSED) });
+      await expect.poll(() => rows.count()).toBe(2);
+      expect(await rows.filter({ hasText: `$${reusePrice}` }).innerText()).toMatch(/Waiting/);
+
+      const admin = await as("admin@gradeline.test", /\/admin$/);
+      await admin.page.goto("/admin/payments");
+      const card = admin.page.locator("li", { has: admin.page.getByRole("heading", { name: `${REUSED}, Harrow Falls` }) }).filter({ hasText: "buyer2@gradeline.test" });
+      await card.getByRole("button", { name: "Refund…" }).click();
+      await card.getByLabel("Amount to refund (USD)").fill(reusePrice);
+      await card.getByLabel("Reason (recorded in the audit log)").fill("The buyer's offer fell through the same day");
+      await card.getByRole("button", { name: "Refund", exact: true }).click();
+      await card.getByText("Refund sent.").waitFor();
+      await expect.poll(() => card.innerText()).toMatch(/refunded/);
+
+      await buyer.page.reload();
+      await buyer.page.getByText("Sewer scope report · locked").waitFor();
+      expect(await buyer.page.getByRole("link", { name: "Download PDF" }).count()).toBe(0);
+      expect(await buyer.page.content()).not.toContain("gradeline-severity-v1");
+      await inspector.page.reload();
+      expect(await rows.filter({ hasText: `$${reusePrice}` }).innerText()).toMatch(/Reversed/);
+    },
+  );
 });

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useId, useState, type Ref } from "react";
+import { useDeferredValue, useId, useState, type Ref } from "react";
 import { Controller, useFieldArray, useForm, useWatch, type FieldError, type FieldPath } from "react-hook-form";
 import useSWR from "swr";
 import type { z } from "zod";
@@ -17,6 +17,7 @@ import { Input } from "@/components/ui/input";
 import { Money } from "@/components/ui/money";
 import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
+import { formatDate } from "@/lib/format";
 import type { OrderDto } from "@/lib/orders/dto";
 import { DEFAULT_TIME_ZONE, isoToZonedLocal, rezoneIso, US_TIME_ZONES, zonedLocalToIso } from "@/lib/time-zones";
 import { createOrderSchema, OCCUPANCIES, OCCUPANCY_LABELS, PROPERTY_TYPE_LABELS, PROPERTY_TYPES } from "@/lib/validations/orders";
@@ -24,7 +25,9 @@ import { postJson } from "@/lib/api/client";
 
 type FormIn = z.input<typeof createOrderSchema>;
 type FormOut = z.output<typeof createOrderSchema>;
-type Quote = { served: boolean; lines: { label: string; cents: number }[]; priceCents: number; inspectorPayoutCents: number };
+/** A listing's fresh report that the next buyer can unlock instead of a new visit (report reuse). */
+type FreshReport = { orderId: string; visitedOn: string; inspectorName: string | null; priceCents: number };
+type Quote = { served: boolean; lines: { label: string; cents: number }[]; priceCents: number; inspectorPayoutCents: number; reuse: FreshReport | null };
 
 const optionalText = { setValueAs: (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v) };
 
@@ -39,8 +42,8 @@ function plain(error: FieldError | undefined, whenMissing: string): string | und
   return error.type === "invalid_format" || error.type === "invalid_type" ? whenMissing : error.message;
 }
 
-async function fetchQuote([, postalCode, cleanoutKnown, buildingSewers, deadline]: readonly [string, string, boolean, number, string]) {
-  const res = await postJson<Quote>("/api/orders/quote", { postalCode, cleanoutKnown, buildingSewers, deadline });
+async function fetchQuote([, street, postalCode, cleanoutKnown, buildingSewers, deadline]: readonly [string, string, string, boolean, number, string]) {
+  const res = await postJson<Quote>("/api/orders/quote", { ...(street ? { address: { street } } : {}), postalCode, cleanoutKnown, buildingSewers, deadline });
   if (!res.ok) throw new Error(res.error.message);
   return res.data;
 }
@@ -158,9 +161,23 @@ function WindowInputs({
   );
 }
 
-function PriceBox({ postalCode, cleanoutKnown, buildingSewers, deadline }: { postalCode: string; cleanoutKnown: boolean; buildingSewers: number; deadline: string }) {
+type PriceBoxProps = {
+  street: string;
+  postalCode: string;
+  cleanoutKnown: boolean;
+  buildingSewers: number;
+  deadline: string;
+  timeZone: string;
+  /** Orders the fresh report for the buyer instead of a new visit. */
+  onReuse: (report: FreshReport) => void;
+  reusing: boolean;
+};
+
+function PriceBox({ street, postalCode, cleanoutKnown, buildingSewers, deadline, timeZone, onReuse, reusing }: PriceBoxProps) {
   const ready = /^\d{5}$/.test(postalCode.trim()) && deadline !== "";
-  const { data, error, isLoading } = useSWR(ready ? (["quote", postalCode.trim(), cleanoutKnown, buildingSewers, deadline] as const) : null, fetchQuote, {
+  const typedStreet = useDeferredValue(street.trim());
+  const key = ready ? (["quote", typedStreet, postalCode.trim(), cleanoutKnown, buildingSewers, deadline] as const) : null;
+  const { data, error, isLoading } = useSWR(key, fetchQuote, {
     keepPreviousData: true,
     revalidateOnFocus: false,
   });
@@ -197,6 +214,21 @@ function PriceBox({ postalCode, cleanoutKnown, buildingSewers, deadline }: { pos
                 </dd>
               </div>
             </dl>
+            {data.reuse ? (
+              <section aria-labelledby="reuse-heading" className="space-y-2 rounded-md border border-rule bg-paper p-3">
+                <h3 id="reuse-heading" className="font-semibold">
+                  This listing already has a fresh report
+                </h3>
+                <p className="text-sm">
+                  Filmed on <span className="num">{formatDate(data.reuse.visitedOn, timeZone)}</span>
+                  {data.reuse.inspectorName ? ` by ${data.reuse.inspectorName}` : ""}. Instead of a new visit, the buyer can unlock it for{" "}
+                  <Money cents={data.reuse.priceCents} />; its findings stay locked until they pay, and the first buyer&apos;s details are never shown.
+                </p>
+                <Button type="button" variant="secondary" size="sm" pending={reusing} onClick={() => onReuse(data.reuse!)}>
+                  {reusing ? "Ordering the report…" : "Offer this report instead"}
+                </Button>
+              </section>
+            ) : null}
             {!data.served ? (
               <Alert tone="warning" title="No inspector serves this postal code yet">
                 Check the postal code. If it is right, no verified inspector covers {postalCode.trim()} at the moment, so the order cannot be placed.
@@ -222,6 +254,7 @@ export function NewOrderForm() {
     setError,
     getValues,
     setValue,
+    trigger,
     formState: { errors, isSubmitting, submitCount },
   } = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(createOrderSchema),
@@ -238,10 +271,24 @@ export function NewOrderForm() {
     },
   });
   const windows = useFieldArray({ control, name: "visitWindows" });
-  const [postalCode = "", cleanoutKnown = true, buildingSewers = 1, deadline = "", timeZone = DEFAULT_TIME_ZONE] = useWatch({
+  const [street = "", postalCode = "", cleanoutKnown = true, buildingSewers = 1, deadline = "", timeZone = DEFAULT_TIME_ZONE] = useWatch({
     control,
-    name: ["address.postalCode", "cleanoutKnown", "buildingSewers", "deadline", "timeZone"],
+    name: ["address.street", "address.postalCode", "cleanoutKnown", "buildingSewers", "deadline", "timeZone"],
   });
+  const [reusing, setReusing] = useState(false);
+
+  async function offerReuse(report: FreshReport) {
+    setFormError(null);
+    if (!(await trigger(["buyer.name", "buyer.email"], { shouldFocus: true }))) {
+      setFormError("Enter the buyer's name and e-mail first: the invitation to the existing report goes there.");
+      return;
+    }
+    setReusing(true);
+    const res = await postJson<OrderDto>("/api/orders/reuse", { sourceOrderId: report.orderId, buyer: getValues("buyer"), timeZone: getValues("timeZone") });
+    if (res.ok) return router.push(`/orders/${res.data.id}`);
+    setReusing(false);
+    setFormError(res.error.message);
+  }
   const tz = register("timeZone");
   const errorCount = Object.keys(errors).length;
 
@@ -485,7 +532,16 @@ export function NewOrderForm() {
       </div>
 
       <div className="space-y-4 lg:sticky lg:top-6">
-        <PriceBox postalCode={postalCode} cleanoutKnown={cleanoutKnown} buildingSewers={Number(buildingSewers) || 1} deadline={deadline} />
+        <PriceBox
+          street={street}
+          postalCode={postalCode}
+          cleanoutKnown={cleanoutKnown}
+          buildingSewers={Number(buildingSewers) || 1}
+          deadline={deadline}
+          timeZone={timeZone}
+          onReuse={(r) => void offerReuse(r)}
+          reusing={reusing}
+        />
         <Button type="submit" size="lg" className="w-full" pending={isSubmitting}>
           {isSubmitting ? "Placing the order…" : "Place order"}
         </Button>
