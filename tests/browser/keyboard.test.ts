@@ -1,13 +1,14 @@
 // The main flow without a pointer: an agent orders a scope, an inspector takes the job and writes
 // in the workspace, using Tab, typing, Enter and Space only, with the focus visible at every stop.
 // (The buyer's unlock and payment by keyboard is in tests/browser/report.test.ts.)
-import type { Browser, Page } from "playwright-core";
+import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import { isoToZonedLocal } from "@/lib/time-zones";
 
 import { appUrl, axeViolations, launchBrowser } from "../utils/browser";
 import { activate, signInByKeyboard, tabTo, typeInto } from "../utils/keyboard";
+import { newUser } from "./helpers";
 
 const TZ = "America/Los_Angeles";
 const DAY = 86_400_000;
@@ -22,14 +23,8 @@ function typedDate(days: number): string {
 let browser: Browser;
 let jobId = "";
 
-async function personPage(): Promise<{ page: Page; problems: string[]; close: () => Promise<void> }> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, timezoneId: TZ, locale: "en-US" });
-  const page = await context.newPage();
-  const problems: string[] = [];
-  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
-  page.on("response", (r) => {
-    if (r.status() >= 500) problems.push(`${r.status()} ${r.url()}`);
-  });
+async function personPage() {
+  const { context, page, problems } = await newUser(browser);
   return { page, problems, close: () => context.close() };
 }
 
