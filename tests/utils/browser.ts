@@ -20,6 +20,9 @@ export const appUrl = (path = "/") => `${process.env.GRADELINE_URL}${path}`;
 
 /** Zero axe-core violations for WCAG 2.0/2.1 A and AA and WCAG 2.2 AA; returns them for a readable failure. */
 export async function axeViolations(page: Page) {
+  // A router refresh swaps the page's <title> for the new one a moment later; let it land so axe sees
+  // the page as it settles. A page that truly has no title still fails below once this wait ends.
+  await page.waitForFunction(() => document.title.trim() !== "", null, { timeout: 5_000 }).catch(() => undefined);
   const result = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
   return result.violations.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`);
 }

@@ -17,7 +17,9 @@ export function SignInForm({ defaultEmail, next }: { defaultEmail: string; next?
     register,
     handleSubmit,
     formState: { errors, isSubmitting },
-  } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: defaultEmail, password: "" } });
+  } = // No defaultValues: the server renders the e-mail into the page, and react-hook-form then reads what is
+  // in the inputs, so whatever was typed or autofilled before hydration is kept.
+  useForm<SignInInput>({ resolver: zodResolver(signInSchema) });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -27,10 +29,10 @@ export function SignInForm({ defaultEmail, next }: { defaultEmail: string; next?
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-5">
       <div aria-live="assertive">{formError ? <Alert tone="danger">{formError}</Alert> : null}</div>
       <Field label="E-mail" error={errors.email?.message} required>
-        {(control) => <Input type="email" autoComplete="email" {...control} {...register("email")} />}
+        {(control) => <Input type="email" autoComplete="email" defaultValue={defaultEmail} {...control} {...register("email")} />}
       </Field>
       <Field label="Password" error={errors.password?.message} required>
         {(control) => <Input type="password" autoComplete="current-password" {...control} {...register("password")} />}

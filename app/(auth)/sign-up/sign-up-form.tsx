@@ -27,7 +27,7 @@ export function SignUpForm({ defaultEmail, defaultRole, next }: { defaultEmail: 
     setError,
     watch,
     formState: { errors, isSubmitting },
-  } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema), defaultValues: { email: defaultEmail, role: defaultRole, name: "", password: "" } });
+  } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema), defaultValues: { role: defaultRole } });
   const role = watch("role");
 
   const onSubmit = handleSubmit(async (values) => {
@@ -46,13 +46,13 @@ export function SignUpForm({ defaultEmail, defaultRole, next }: { defaultEmail: 
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-5">
       <div aria-live="assertive">{formError ? <Alert tone="danger">{formError}</Alert> : null}</div>
       <Fieldset legend="I am a" error={errors.role?.message}>
         <div className="grid gap-2">
           {ROLES.map((r) => (
             <label key={r.value} className="flex cursor-pointer items-start gap-3 rounded-md border border-rule bg-white p-3 has-[:checked]:border-teal has-[:checked]:bg-teal-50">
-              <input type="radio" value={r.value} className="mt-1 accent-teal" {...register("role")} />
+              <input type="radio" value={r.value} defaultChecked={r.value === defaultRole} className="mt-1 accent-teal" {...register("role")} />
               <span>
                 <span className="block font-medium">{r.label}</span>
                 <span className="block text-sm text-ink-2">{r.hint}</span>
@@ -70,7 +70,7 @@ export function SignUpForm({ defaultEmail, defaultRole, next }: { defaultEmail: 
         </Field>
       ) : null}
       <Field label="E-mail" error={errors.email?.message} required>
-        {(control) => <Input type="email" autoComplete="email" {...control} {...register("email")} />}
+        {(control) => <Input type="email" autoComplete="email" defaultValue={defaultEmail} {...control} {...register("email")} />}
       </Field>
       <Field label="Password" hint="At least 10 characters." error={errors.password?.message} required>
         {(control) => <Input type="password" autoComplete="new-password" {...control} {...register("password")} />}
