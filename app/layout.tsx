@@ -1,8 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import type { ReactNode } from "react";
 
-import { Providers } from "@/components/providers";
-
 import { fontVariables } from "./fonts";
 
 import "./globals.css";
@@ -33,7 +31,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
   return (
     <html lang="en" className={fontVariables}>
       <body className="min-h-dvh">
-        <Providers>{children}</Providers>
+        {children}
       </body>
     </html>
   );

@@ -26,7 +26,7 @@ import { Skeleton } from "@/components/ui/skeleton";
 import { ORDER_STATUS_LABELS, StatusBadge, type OrderStatus } from "@/components/ui/status-badge";
 import { getJson } from "@/lib/api/client";
 import { formatDate, formatDateTime } from "@/lib/format";
-import type { OrderDto, OrderListDto } from "@/lib/orders/dto";
+import type { OrderListDto, OrderSummaryDto } from "@/lib/orders/dto";
 
 type SortKey = "deadline" | "created" | "address" | "status" | "price";
 type StatusFilter = OrderStatus | "at_risk" | "";
@@ -38,7 +38,7 @@ const LIVE_STATES = new Set(["open", "accepted", "scheduled"]);
 const PAGE_SIZE = 20;
 
 const features = tableFeatures({ rowSortingFeature, rowPaginationFeature });
-const col = createColumnHelper<typeof features, OrderDto>();
+const col = createColumnHelper<typeof features, OrderSummaryDto>();
 
 const columns = col.columns([
   col.accessor((o) => o.address.street, {
@@ -68,14 +68,14 @@ const columns = col.columns([
   col.accessor("priceCents", { id: "price", header: "Price", cell: ({ row }) => <Money cents={row.original.priceCents} /> }),
 ]);
 
-const NO_ORDERS: OrderDto[] = [];
+const NO_ORDERS: OrderSummaryDto[] = [];
 
 /** Whose orders the table lists: the agent's own, or (for an admin) every order in the marketplace. */
 export type OrdersScope = "agent" | "admin";
 
 const detailHref = (scope: OrdersScope, id: string) => (scope === "admin" ? `/admin/orders/${id}` : `/orders/${id}`);
 
-function ListingCell({ order, scope }: { order: OrderDto; scope: OrdersScope }) {
+function ListingCell({ order, scope }: { order: OrderSummaryDto; scope: OrdersScope }) {
   return (
     <div className="min-w-0">
       <Link href={detailHref(scope, order.id)} className="text-ink hover:text-teal font-medium underline-offset-4 hover:underline">
@@ -90,7 +90,7 @@ function ListingCell({ order, scope }: { order: OrderDto; scope: OrdersScope }) 
   );
 }
 
-function DeadlineCell({ order }: { order: OrderDto }) {
+function DeadlineCell({ order }: { order: OrderSummaryDto }) {
   if (!LIVE_STATES.has(order.status)) return <span className="num text-ink-2 text-sm">{formatDate(order.deadline, order.timeZone)}</span>;
   return (
     <div>
@@ -102,7 +102,7 @@ function DeadlineCell({ order }: { order: OrderDto }) {
   );
 }
 
-function VisitCell({ order }: { order: OrderDto }) {
+function VisitCell({ order }: { order: OrderSummaryDto }) {
   return (
     <div className="text-sm">
       <p className="text-ink">{order.inspector ? order.inspector.name : <span className="text-ink-2">Waiting for an inspector</span>}</p>
@@ -124,7 +124,8 @@ function SortIcon({ dir }: { dir: false | "asc" | "desc" }) {
   );
 }
 
-export function OrdersTable({ scope = "agent" }: { scope?: OrdersScope }) {
+/** The orders table; `initial` is its first page as the server rendered it, so the table shows at once. */
+export function OrdersTable({ scope = "agent", initial }: { scope?: OrdersScope; initial?: OrderListDto }) {
   const searchId = useId();
   const statusId = useId();
   const [search, setSearch] = useState("");
@@ -143,9 +144,14 @@ export function OrdersTable({ scope = "agent" }: { scope?: OrdersScope }) {
   if (status) params.set("status", status);
   if (query) params.set("q", query.slice(0, 100));
 
-  const { data, error, isLoading, mutate } = useSWR<OrderListDto>(`/api/orders?${params}`, (url: string) => getJson<OrderListDto>(url), {
+  const key = `/api/orders?${params}`;
+  const [initialKey] = useState(key);
+  const { data, error, isLoading, mutate } = useSWR<OrderListDto>(key, (url: string) => getJson<OrderListDto>(url), {
     refreshInterval: 15_000,
     keepPreviousData: true,
+    // Only for the view the server rendered; any other sort, filter or page is fetched.
+    fallbackData: key === initialKey ? initial : undefined,
+    revalidateOnMount: !initial,
   });
 
   const table = useTable({
@@ -353,7 +359,7 @@ export function OrdersTable({ scope = "agent" }: { scope?: OrdersScope }) {
   );
 }
 
-function OrderCard({ order, scope }: { order: OrderDto; scope: OrdersScope }) {
+function OrderCard({ order, scope }: { order: OrderSummaryDto; scope: OrdersScope }) {
   return (
     <li
       className={clsx(

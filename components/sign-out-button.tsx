@@ -1,10 +1,13 @@
 "use client";
 
-import { signOut } from "next-auth/react";
-
 export function SignOutButton({ className }: { className?: string }) {
   return (
-    <button type="button" className={className} onClick={() => signOut({ callbackUrl: "/" })}>
+    <button
+      type="button"
+      className={className}
+      // Loaded on click: next-auth's client is needed for this one action, not on every signed-in page.
+      onClick={async () => (await import("next-auth/react")).signOut({ callbackUrl: "/" })}
+    >
       Sign out
     </button>
   );

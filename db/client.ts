@@ -32,10 +32,16 @@ async function openPglite(dataDir: string | null): Promise<Handle> {
     fs.mkdirSync(path.dirname(dataDir), { recursive: true });
   }
   // Tests start each file from a migrated template (PGlite's own initdb is slow on small machines).
-  const template = !dataDir && process.env.PGLITE_TEMPLATE && fs.existsSync(process.env.PGLITE_TEMPLATE) ? new Blob([fs.readFileSync(process.env.PGLITE_TEMPLATE)]) : null;
+  const template =
+    !dataDir && process.env.PGLITE_TEMPLATE && fs.existsSync(process.env.PGLITE_TEMPLATE)
+      ? new Blob([fs.readFileSync(process.env.PGLITE_TEMPLATE)])
+      : null;
   const client = template ? await PGlite.create({ loadDataDir: template }) : await PGlite.create(dataDir ?? "memory://");
   const db = drizzle({ client, schema });
   await migrate(db, { migrationsFolder });
+  // PGlite runs no autovacuum, so without this the planner never learns table sizes and joins whole
+  // tables where an index would read twenty rows. startStatisticsRefresher() repeats it.
+  await client.exec("ANALYZE");
   return {
     db: db as unknown as Db,
     kind: "pglite",
@@ -84,6 +90,24 @@ export async function getDb(): Promise<Db> {
   return (await handle()).db;
 }
 
+/**
+ * Refreshes the planner's statistics of the embedded database every intervalMs (PostgreSQL's own
+ * autovacuum does this on a server); returns a function that stops it.
+ */
+export function startStatisticsRefresher(intervalMs = 60 * 60_000): () => void {
+  const timer = setInterval(() => {
+    // Only a database that is open: a closed one is not reopened for this.
+    void g.__gradelineDb?.then((h) => h.pglite?.exec("ANALYZE")).catch((e) => console.error("[statistics] ANALYZE failed", e));
+  }, intervalMs);
+  timer.unref();
+  return () => clearInterval(timer);
+}
+
+/** True with the embedded database: the data lock makes this process its only writer. */
+export async function isOnlyWriter(): Promise<boolean> {
+  return (await handle()).kind === "pglite";
+}
+
 export async function pingDb(): Promise<{ kind: string }> {
   const h = await handle();
   await h.ping();
@@ -108,7 +132,9 @@ export async function loadDataDirInto(dir: string, dump: Uint8Array): Promise<{ 
   fs.mkdirSync(path.dirname(dir), { recursive: true });
   const client = await PGlite.create(dir, { loadDataDir: new Blob([Buffer.from(dump)]) });
   try {
-    const { rows } = await client.query<{ n: number }>("select count(*)::int as n from information_schema.tables where table_schema = 'public'");
+    const { rows } = await client.query<{ n: number }>(
+      "select count(*)::int as n from information_schema.tables where table_schema = 'public'",
+    );
     await client.query("CHECKPOINT");
     return { tables: rows[0].n };
   } finally {

@@ -159,6 +159,8 @@ export const orders = pgTable(
   },
   (t) => [
     index("orders_agent_idx").on(t.agentId, t.createdAt),
+    // The orders table's default view (soonest deadline first) reads 20 rows off this index in order.
+    index("orders_agent_deadline_idx").on(t.agentId, t.deadline, t.id),
     index("orders_inspector_idx").on(t.inspectorId),
     index("orders_status_deadline_idx").on(t.status, t.deadline),
     index("orders_buyer_email_idx").on(t.buyerEmail),

@@ -14,7 +14,7 @@ import { seedDemoReports } from "./seed-reports";
 
 export const DEMO_PASSWORD = "gradeline-demo";
 
-const PATHS: Record<OrderStatus, OrderStatus[]> = {
+export const PATHS: Record<OrderStatus, OrderStatus[]> = {
   open: ["open"],
   accepted: ["open", "accepted"],
   scheduled: ["open", "accepted", "scheduled"],

@@ -2,17 +2,36 @@ export function formatAddress(a: { street: string; unit?: string | null; city: s
   return `${a.street}${a.unit ? `, ${a.unit}` : ""}, ${a.city}, ${a.state} ${a.postalCode}`;
 }
 
+// Building an Intl.DateTimeFormat costs far more than formatting with one (it was most of the
+// orders page's render time), so each kind is made once per time zone and kept.
+const KINDS = {
+  dateTime: { locale: "en-US", options: { weekday: "short", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" } },
+  date: { locale: "en-US", options: { month: "short", day: "numeric", year: "numeric" } },
+  isoDate: { locale: "en-CA", options: { year: "numeric", month: "2-digit", day: "2-digit" } },
+} as const satisfies Record<string, { locale: string; options: Intl.DateTimeFormatOptions }>;
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+function formatter(kind: keyof typeof KINDS, timeZone: string): Intl.DateTimeFormat {
+  const key = `${kind} ${timeZone}`;
+  let f = formatters.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(KINDS[kind].locale, { timeZone, ...KINDS[kind].options });
+    formatters.set(key, f);
+  }
+  return f;
+}
+
 export function formatDateTime(date: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" }).format(new Date(date));
+  return formatter("dateTime", timeZone).format(new Date(date));
 }
 
 export function formatDate(date: Date | string, timeZone = "UTC"): string {
-  return new Intl.DateTimeFormat("en-US", { timeZone, month: "short", day: "numeric", year: "numeric" }).format(new Date(date));
+  return formatter("date", timeZone).format(new Date(date));
 }
 
 /** The calendar day a moment falls on in a time zone, as an ISO date: "2026-11-30". */
 export function localIsoDate(date: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date(date));
+  return formatter("isoDate", timeZone).format(new Date(date));
 }
 
 /** "in 3 d 4 h", "in 5 h", "2 h ago": for deadlines. */

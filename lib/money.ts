@@ -1,3 +1,5 @@
+const usd = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
+
 export function formatMoney(cents: number): string {
-  return new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" }).format(cents / 100);
+  return usd.format(cents / 100);
 }

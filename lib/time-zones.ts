@@ -117,16 +117,30 @@ export function rezoneIso(iso: string, fromZone: string, toZone: string): string
   return local ? zonedLocalToIso(local.date, local.time, toZone) : null;
 }
 
+// Display formatters, made once per zone and kind: building one costs far more than using it.
+const display = new Map<string, Intl.DateTimeFormat>();
+function displayFormatter(kind: "zone" | "day" | "time", timeZone: string): Intl.DateTimeFormat {
+  const key = `${kind} ${timeZone}`;
+  let f = display.get(key);
+  if (!f) {
+    const options: Intl.DateTimeFormatOptions =
+      kind === "zone" ? { timeZoneName: "short" } : kind === "day" ? { weekday: "short", month: "short", day: "numeric" } : { hour: "numeric", minute: "2-digit" };
+    f = new Intl.DateTimeFormat("en-US", { timeZone, ...options });
+    display.set(key, f);
+  }
+  return f;
+}
+
 /** The short zone name at an instant: "PST", "PDT", "MST". */
 export function zoneAbbreviation(ms: number, timeZone: string): string {
-  const part = new Intl.DateTimeFormat("en-US", { timeZone, timeZoneName: "short" }).formatToParts(new Date(ms)).find((p) => p.type === "timeZoneName");
+  const part = displayFormatter("zone", timeZone).formatToParts(new Date(ms)).find((p) => p.type === "timeZoneName");
   return part?.value ?? timeZone;
 }
 
 /** "Tue, Dec 8, 9:00 AM – 12:00 PM PST"; the date is repeated only when the range crosses midnight. */
 export function formatTimeRange(startIso: string, endIso: string, timeZone: string): string {
-  const day = new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", month: "short", day: "numeric" });
-  const time = new Intl.DateTimeFormat("en-US", { timeZone, hour: "numeric", minute: "2-digit" });
+  const day = displayFormatter("day", timeZone);
+  const time = displayFormatter("time", timeZone);
   const start = new Date(startIso);
   const end = new Date(endIso);
   const zone = zoneAbbreviation(end.getTime(), timeZone);

@@ -3,24 +3,11 @@ import { spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
 
+import { buildIsFresh } from "./lib/build-state";
+
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 const bin = (name: string) => path.join("node_modules", ".bin", name);
 const run = (cmd: string, args: string[]) => spawnSync(cmd, args, { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } }).status ?? 1;
-
-function newestSource(dir: string): number {
-  let newest = 0;
-  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    if (["node_modules", ".next", ".data", ".git", "tests", "bench", "next-env.d.ts"].includes(entry.name) || entry.name.endsWith(".tsbuildinfo")) continue;
-    const full = path.join(dir, entry.name);
-    newest = Math.max(newest, entry.isDirectory() ? newestSource(full) : fs.statSync(full).mtimeMs);
-  }
-  return newest;
-}
-
-function buildIsFresh(): boolean {
-  const id = path.join(".next", "BUILD_ID");
-  return fs.existsSync(id) && fs.statSync(id).mtimeMs >= newestSource(".");
-}
 
 const failures: string[] = [];
 if (run(bin("vitest"), ["run"]) !== 0) failures.push("unit and integration tests");

@@ -7,6 +7,7 @@ import type { UserSearchQuery } from "@/lib/validations/admin";
 import { getDb } from "../client";
 import { users, type Role } from "../schema";
 import { recordAudit } from "./audit";
+import { forgetLiveSessions } from "./users";
 
 export type AdminUserDto = {
   id: string;
@@ -70,7 +71,7 @@ export type UserChange = { disabled?: boolean; role?: Role; reason: string | nul
  */
 export async function changeUser(userId: string, change: UserChange, actor: { id: string; ip: string }): Promise<AdminUserDto | null> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const changed = await db.transaction(async (tx) => {
     const [before] = await tx.select().from(users).where(eq(users.id, userId)).for("update").limit(1);
     if (!before) return null;
     const disable = change.disabled !== undefined && change.disabled !== !!before.disabledAt;
@@ -106,4 +107,7 @@ export async function changeUser(userId: string, change: UserChange, actor: { id
       );
     return toDto(after);
   });
+  // After the commit, so no lookup remembers the session as it was before.
+  forgetLiveSessions();
+  return changed;
 }

@@ -4,14 +4,18 @@ import { and, eq, gt, isNull, sql } from "drizzle-orm";
 
 import { authLink } from "@/lib/auth/next-path";
 
-import { getDb, type Db, type Tx } from "../client";
-import { authSessions, type Role, users } from "../schema";
+import { getDb, isOnlyWriter, type Db, type Tx } from "../client";
+import { authSessions, users, type Role } from "../schema";
 
 export const normalizeEmail = (email: string) => email.trim().toLowerCase();
 
 export async function findUserByEmail(email: string) {
   const db = await getDb();
-  const [row] = await db.select().from(users).where(eq(users.email, normalizeEmail(email))).limit(1);
+  const [row] = await db
+    .select()
+    .from(users)
+    .where(eq(users.email, normalizeEmail(email)))
+    .limit(1);
   return row ?? null;
 }
 
@@ -39,7 +43,13 @@ export async function createUser(input: { email: string; name: string; role: Rol
   return row ?? null;
 }
 
-export async function createAuthSession(input: { userId: string; sessionVersion: number; ip: string | null; userAgent: string | null; expiresAt: Date }) {
+export async function createAuthSession(input: {
+  userId: string;
+  sessionVersion: number;
+  ip: string | null;
+  userAgent: string | null;
+  expiresAt: Date;
+}) {
   const db = await getDb();
   const [row] = await db.insert(authSessions).values(input).returning({ id: authSessions.id });
   return row.id;
@@ -47,14 +57,42 @@ export async function createAuthSession(input: { userId: string; sessionVersion:
 
 export async function revokeAuthSession(sessionId: string) {
   const db = await getDb();
-  await db.update(authSessions).set({ revokedAt: new Date() }).where(and(eq(authSessions.id, sessionId), isNull(authSessions.revokedAt)));
+  await db
+    .update(authSessions)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(authSessions.id, sessionId), isNull(authSessions.revokedAt)));
+  forgetLiveSessions();
+}
+
+type LiveUser = { id: string; email: string; name: string; role: Role };
+
+// Every page and API call checks its session. With the embedded database this process is its only
+// writer (the data lock), so a session found live is remembered for up to a minute, and every write
+// that can end a session (below, and changeUser) forgets them all once it has committed. A lookup
+// that overlapped such a write is not remembered (the generation moved). A PostgreSQL server may
+// have other writers, so with it every request asks the database.
+const memo = globalThis as unknown as {
+  __gradelineLiveSessions?: { generation: number; sessions: Map<string, { user: LiveUser; until: number }> };
+};
+const liveSessions = () => (memo.__gradelineLiveSessions ??= { generation: 0, sessions: new Map() });
+const REMEMBER_MS = 60_000;
+
+/** Forgets every remembered session; call after any committed write that can end one. */
+export function forgetLiveSessions() {
+  const live = liveSessions();
+  live.generation++;
+  live.sessions.clear();
 }
 
 /** The user behind a live session: not revoked, not expired, same session version, account enabled. */
-export async function findLiveSessionUser(sessionId: string) {
+export async function findLiveSessionUser(sessionId: string): Promise<LiveUser | null> {
+  const live = liveSessions();
+  const known = live.sessions.get(sessionId);
+  if (known && known.until > Date.now()) return known.user;
+  const generation = live.generation;
   const db = await getDb();
   const [row] = await db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role })
+    .select({ id: users.id, email: users.email, name: users.name, role: users.role, expiresAt: authSessions.expiresAt })
     .from(authSessions)
     .innerJoin(users, eq(users.id, authSessions.userId))
     .where(
@@ -67,13 +105,23 @@ export async function findLiveSessionUser(sessionId: string) {
       ),
     )
     .limit(1);
-  return row ?? null;
+  if (!row) return null;
+  const { expiresAt, ...user } = row;
+  if (generation === live.generation && (await isOnlyWriter())) {
+    if (live.sessions.size >= 10_000) live.sessions.clear();
+    live.sessions.set(sessionId, { user, until: Math.min(expiresAt.getTime(), Date.now() + REMEMBER_MS) });
+  }
+  return user;
 }
 
 /** Ends every session of the user at once (password change, disabled account). */
 export async function bumpSessionVersion(userId: string) {
   const db = await getDb();
-  await db.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
+  await db
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
+  forgetLiveSessions();
 }
 
 export async function setPassword(userId: string, passwordHash: string) {
@@ -82,6 +130,7 @@ export async function setPassword(userId: string, passwordHash: string) {
     .update(users)
     .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
     .where(eq(users.id, userId));
+  forgetLiveSessions();
 }
 
 export async function setDisabled(userId: string, disabled: boolean) {
@@ -90,4 +139,5 @@ export async function setDisabled(userId: string, disabled: boolean) {
     .update(users)
     .set({ disabledAt: disabled ? new Date() : null, sessionVersion: sql`${users.sessionVersion} + 1` })
     .where(eq(users.id, userId));
+  forgetLiveSessions();
 }

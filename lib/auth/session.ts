@@ -1,6 +1,5 @@
 import "server-only";
 
-import { decode, type JWT } from "next-auth/jwt";
 import { cookies } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
@@ -10,6 +9,7 @@ import type { Role } from "@/db/schema";
 import { env } from "@/lib/env";
 
 import { ROLE_HOME } from "./permissions";
+import { decodeSessionToken } from "./session-token";
 
 export type SessionUser = { id: string; email: string; name: string; role: Role; sessionId: string };
 
@@ -18,13 +18,8 @@ export const SESSION_COOKIES = ["__Secure-next-auth.session-token", "next-auth.s
 /** Reads a next-auth session cookie value and checks it against the database on every request. */
 export async function userFromSessionToken(raw: string | undefined | null): Promise<SessionUser | null> {
   if (!raw) return null;
-  let token: JWT | null = null;
-  try {
-    token = await decode({ token: raw, secret: env().NEXTAUTH_SECRET });
-  } catch {
-    return null;
-  }
-  if (!token?.sid) return null;
+  const token = await decodeSessionToken(raw, env().NEXTAUTH_SECRET);
+  if (typeof token?.sid !== "string") return null;
   const user = await findLiveSessionUser(token.sid);
   return user ? { ...user, sessionId: token.sid } : null;
 }

@@ -43,4 +43,10 @@ export type ProposalDto = { id: string; start: string; end: string; status: "pro
 
 export type OrderDetailDto = { order: OrderDto; events: OrderEventDto[]; proposals: ProposalDto[] };
 
-export type OrderListDto = { orders: OrderDto[]; total: number; page: number; pageSize: number };
+/** One row of an orders table: what the list shows, without the order's access details and price lines. */
+export type OrderSummaryDto = Pick<OrderDto, "id" | "status" | "address" | "listingRef" | "deadline" | "timeZone" | "priceCents" | "appointment" | "atRisk" | "createdAt"> & {
+  inspector: { id: string; name: string } | null;
+  buyerName: string;
+};
+
+export type OrderListDto = { orders: OrderSummaryDto[]; total: number; page: number; pageSize: number };

@@ -3,7 +3,7 @@ import path from "node:path";
 
 import next from "next";
 
-import { closeDb, databaseDir, getDb } from "@/db/client";
+import { closeDb, databaseDir, getDb, startStatisticsRefresher } from "@/db/client";
 import { acquireDataLock, DataLockError, releaseAllDataLocks } from "@/db/lock";
 import { seedDemoWorld } from "@/db/seed";
 import { env, EnvError } from "@/lib/env";
@@ -64,6 +64,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
   const stopPayouts = startPayoutWorker();
   const stopUploads = startUploadSweeper();
   const stopLicences = startLicenceSweeper(60 * 60_000);
+  const stopStatistics = startStatisticsRefresher();
 
   const app = next({ dev: opts.dev, hostname: e.HOST, port: e.PORT, dir: process.cwd() });
   const handle = app.getRequestHandler();
@@ -87,6 +88,7 @@ export async function boot(opts: { dev: boolean; standins: boolean; seed: boolea
     stopPayouts();
     stopUploads();
     stopLicences();
+    stopStatistics();
     const force = setTimeout(() => server.closeAllConnections(), 10_000);
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);

@@ -68,6 +68,7 @@ describe("managing users", async () => {
   it("changes a role with a reason, records it with both roles, and ends the old sessions", async () => {
     const buyer = await signedIn("buyer");
     const reason = "Signed up as a buyer by mistake; works as an agent at Millrace Realty.";
+    expect((await call(me, { cookie: buyer.cookie })).status).toBe(200);
     const res = await patch(buyer.user.id, { role: "agent", reason });
     expect(res.status).toBe(200);
     expect(res.json.user).toMatchObject({ role: "agent" });

@@ -1,7 +1,8 @@
+import { encode } from "next-auth/jwt";
 import { describe, expect, it } from "vitest";
 
 import { GET as me } from "@/app/api/me/route";
-import { revokeAuthSession, setDisabled, setPassword } from "@/db/queries/users";
+import { createAuthSession, revokeAuthSession, setDisabled, setPassword } from "@/db/queries/users";
 
 import { call, createTestUser, sessionCookieFor } from "../utils/session";
 
@@ -29,9 +30,27 @@ describe("sessions end at once", () => {
   it("disabling an account ends its sessions, even if enabled again later", async () => {
     const user = await createTestUser("inspector");
     const { cookie } = await sessionCookieFor(user);
+    expect((await call(me, { cookie })).status).toBe(200);
     await setDisabled(user.id, true);
     expect((await call(me, { cookie })).status).toBe(401);
     await setDisabled(user.id, false);
+    expect((await call(me, { cookie })).status).toBe(401);
+  });
+
+  it("a session remembered by earlier requests still ends when it expires", async () => {
+    const user = await createTestUser("agent");
+    const sid = await createAuthSession({
+      userId: user.id,
+      sessionVersion: user.sessionVersion,
+      ip: null,
+      userAgent: "vitest",
+      expiresAt: new Date(Date.now() + 1_500),
+    });
+    const token = await encode({ token: { sub: user.id, sid }, secret: process.env.NEXTAUTH_SECRET! });
+    const cookie = `next-auth.session-token=${token}`;
+    expect((await call(me, { cookie })).status).toBe(200);
+    expect((await call(me, { cookie })).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 1_700));
     expect((await call(me, { cookie })).status).toBe(401);
   });
 });

@@ -16,7 +16,7 @@ import { countOrdersByStatus } from "@/db/queries/orders";
 import type { OrderStatus } from "@/db/schema";
 import { requireUser } from "@/lib/auth/session";
 import { formatAddress, formatDateTime } from "@/lib/format";
-import type { OrderDto } from "@/lib/orders/dto";
+import type { OrderSummaryDto } from "@/lib/orders/dto";
 import { DEFAULT_TIME_ZONE } from "@/lib/time-zones";
 
 export const metadata: Metadata = { title: "Overview" };
@@ -129,7 +129,7 @@ function Figure({ label, note, children }: { label: string; note: ReactNode; chi
   );
 }
 
-function AtRiskList({ orders, total }: { orders: OrderDto[]; total: number }) {
+function AtRiskList({ orders, total }: { orders: OrderSummaryDto[]; total: number }) {
   return (
     <>
       <DataList

@@ -1,23 +1,17 @@
 import type { Metadata } from "next";
 
-import { OrdersTable } from "@/components/orders-table";
-import { ButtonLink } from "@/components/ui/button";
-import { PageHeader } from "@/components/ui/page-header";
+import { listOrdersPage } from "@/db/queries/order-lists";
 import { requireUser } from "@/lib/auth/session";
+import { listOrdersQuery } from "@/lib/validations/orders";
 
+import { OrdersScreen } from "./orders-screen";
 
 export const metadata: Metadata = { title: "Orders" };
 
+// The table's default view, rendered on the server so the first page needs no second round trip.
+const FIRST_PAGE = listOrdersQuery.parse({});
+
 export default async function OrdersPage() {
-  await requireUser("agent");
-  return (
-    <>
-      <PageHeader
-        title="Orders"
-        description="Every sewer scope you have ordered, with a live countdown to its contingency deadline."
-        actions={<ButtonLink href="/orders/new">New order</ButtonLink>}
-      />
-      <OrdersTable />
-    </>
-  );
+  const user = await requireUser("agent");
+  return <OrdersScreen initial={await listOrdersPage(user.id, FIRST_PAGE)} />;
 }

@@ -1,0 +1,3 @@
+"use client";
+
+export { AreaError as default } from "@/components/area-error";

@@ -1,0 +1,1 @@
+CREATE INDEX "orders_agent_deadline_idx" ON "orders" USING btree ("agent_id","deadline","id");
