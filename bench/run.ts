@@ -6,7 +6,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 
-import { firstLoadJs } from "./lib/first-load";
+import { firstLoadJs } from "../scripts/lib/first-load";
 import { lighthousePages, type LighthouseScores } from "./lib/lighthouse";
 import { expectPage, load, median, signedInCookie, type LoadResult } from "./lib/load";
 import { fmt, machine, save, table, type Row } from "./lib/report";
