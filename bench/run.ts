@@ -85,14 +85,17 @@ async function loadSection(server: BenchServer): Promise<{ agent: string; buyer:
   const orders: LoadResult[] = [];
   const statics: LoadResult[] = [];
   const fixed: LoadResult[] = [];
+  const singles: LoadResult[] = [];
   for (let round = 1; round <= ROUNDS; round++) {
-    console.log(`P1/P2 round ${round} of ${ROUNDS}: ${SECONDS} s each at 10 connections`);
+    console.log(`P1/P2/P6 round ${round} of ${ROUNDS}: ${SECONDS} s each, /orders at 10 and at 1 connection, the baselines at 10`);
     orders.push(await load(ordersUrl, { connections: 10, seconds: SECONDS, cookie: agent }));
+    singles.push(await load(ordersUrl, { connections: 1, seconds: SECONDS, cookie: agent }));
     statics.push(await load(staticUrl, { connections: 10, seconds: SECONDS }));
     if (haveFixed) fixed.push(await load(fixedUrl, { connections: 10, seconds: SECONDS }));
   }
-  console.log(`P6: ${SECONDS} s at 1 connection, then a ${HOLD_SECONDS} s hold at 20 connections`);
-  const single = await load(ordersUrl, { connections: 1, seconds: SECONDS, cookie: agent });
+  console.log(`P6: a ${HOLD_SECONDS} s hold at 20 connections`);
+  const single = { p50: median(singles.map((r) => r.p50)) };
+  const p6Ratio = median(orders.map((r, i) => r.p50 / singles[i].p50));
   const hold = await load(ordersUrl, { connections: 20, seconds: HOLD_SECONDS, cookie: agent });
 
   // Each round measures the page and its baseline back to back, so ratios are taken per round and
@@ -103,7 +106,7 @@ async function loadSection(server: BenchServer): Promise<{ agent: string; buyer:
   const rps = median(orders.map((r) => r.rps));
   const p1Ratio = median(orders.map((r, i) => r.p50 / statics[i].p50));
   const bad = (rs: LoadResult[]) => rs.reduce((s, r) => s + r.errors + r.non2xx + r.timeouts, 0);
-  if (bad([...orders, ...statics, ...fixed, single])) notes.push(`errors or non-2xx answers during the P1/P2/P6 runs: ${bad([...orders, ...statics, ...fixed, single])}`);
+  if (bad([...orders, ...statics, ...fixed, ...singles])) notes.push(`errors or non-2xx answers during the P1/P2/P6 runs: ${bad([...orders, ...statics, ...fixed, ...singles])}`);
   const runs = (rs: LoadResult[], key: "p50" | "rps") => rs.map((r) => fmt(r[key], 0)).join(", ");
   rows.push({ id: "P1", figure: "p50 of /orders (agent, 200 orders) / p50 of a static route, 10 connections, median of the rounds' ratios", measured: `${fmt(p50)} ms (${runs(orders, "p50")})`, baseline: `${fmt(staticP50)} ms (${runs(statics, "p50")})`, ratio: fmt(p1Ratio, 2), target: "<= 12", holds: p1Ratio <= 12 });
   rows.push({ id: "P1", figure: "p99 of /orders at 10 connections, median of the rounds", measured: `${fmt(p99)} ms`, baseline: "-", ratio: "-", target: "< 500 ms", holds: p99 < 500 });
@@ -112,7 +115,7 @@ async function loadSection(server: BenchServer): Promise<{ agent: string; buyer:
     const p2Ratio = median(orders.map((r, i) => r.rps / fixed[i].rps));
     rows.push({ id: "P2", figure: "req/s of /orders / the same page from fixed in-memory data, median of the rounds' ratios", measured: `${fmt(rps)} req/s (${runs(orders, "rps")})`, baseline: `${fmt(fixedRps)} req/s (${runs(fixed, "rps")})`, ratio: fmt(p2Ratio, 2), target: ">= 0.7", holds: p2Ratio >= 0.7 });
   }
-  rows.push({ id: "P6", figure: "p50 of /orders at 10 connections / at 1 connection", measured: `${fmt(p50)} ms`, baseline: `${fmt(single.p50)} ms`, ratio: fmt(p50 / single.p50, 2), target: "<= 10", holds: p50 / single.p50 <= 10 });
+  rows.push({ id: "P6", figure: "p50 of /orders at 10 connections / at 1 connection, median of the rounds' ratios", measured: `${fmt(p50)} ms`, baseline: `${fmt(single.p50)} ms (${runs(singles, "p50")})`, ratio: fmt(p6Ratio, 2), target: "<= 10", holds: p6Ratio <= 10 });
   const holdBad = hold.errors + hold.non2xx + hold.timeouts;
   rows.push({ id: "P6", figure: `errors over a ${HOLD_SECONDS} s hold at 20 connections on /orders`, measured: `${holdBad} of ${hold.requests} (p50 ${fmt(hold.p50)} ms, p99 ${fmt(hold.p99)} ms)`, baseline: "-", ratio: "-", target: "0", holds: holdBad === 0 && HOLD_SECONDS >= 60 });
   return { agent, buyer, reportUrl };
