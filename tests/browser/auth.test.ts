@@ -60,7 +60,10 @@ describe("signing in and out in Chromium", () => {
     await page.getByRole("button", { name: "Create account" }).click();
     await expect.poll(() => page.getByText("Choose how you will use Gradeline.").count()).toBeGreaterThan(0);
     expect(await axeViolations(page)).toEqual([]);
+    expect(await page.getByLabel(/Brokerage/).count()).toBe(0);
     await page.getByLabel(/Buyer's agent/).check();
+    // Choosing the agent role asks for the brokerage.
+    await page.getByLabel(/Brokerage/).fill("Brannock and Weir Realty");
     await page.getByLabel("Full name").fill("Nell Brannock");
     await page.getByLabel("E-mail").fill(`nell.${Date.now()}@example.test`);
     await page.getByLabel("Password").fill("a-long-enough-password");

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -25,10 +25,10 @@ export function SignUpForm({ defaultEmail, defaultRole, next }: { defaultEmail: 
     register,
     handleSubmit,
     setError,
-    watch,
+    control,
     formState: { errors, isSubmitting },
   } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema), defaultValues: { role: defaultRole } });
-  const role = watch("role");
+  const role = useWatch({ control, name: "role" });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
