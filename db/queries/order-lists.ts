@@ -12,6 +12,7 @@ import { getDb, type Db } from "../client";
 import { listings, orders, serviceAreas, users } from "../schema";
 import { atRiskCondition } from "./at-risk-sql";
 import { selectOrders, toJobDto } from "./order-dto";
+import { orderSummary } from "./orders";
 
 type ListQuery = z.infer<typeof listOrdersQuery>;
 
@@ -26,25 +27,7 @@ const SORTS = {
 const inspectorUser = alias(users, "inspector_user");
 
 /** The columns an orders table shows, and the few the at-risk rule reads. */
-const summaryColumns = {
-  id: orders.id,
-  status: orders.status,
-  listingRef: orders.listingRef,
-  deadline: orders.deadline,
-  timeZone: orders.timeZone,
-  priceCents: orders.priceCents,
-  appointmentStart: orders.appointmentStart,
-  appointmentEnd: orders.appointmentEnd,
-  createdAt: orders.createdAt,
-  inspectorId: orders.inspectorId,
-  inspectorName: inspectorUser.name,
-  buyerName: orders.buyerName,
-  street: listings.street,
-  unit: listings.unit,
-  city: listings.city,
-  state: listings.state,
-  postalCode: listings.postalCode,
-};
+const summaryColumns = { ...orderSummary, listingRef: orders.listingRef, inspectorId: orders.inspectorId, inspectorName: inspectorUser.name };
 
 /** One page of orders: the agent's own, or every order for an admin (agentId null). */
 export async function listOrdersPage(agentId: string | null, q: ListQuery): Promise<OrderListDto> {

@@ -1,11 +1,12 @@
 import "server-only";
 
-import { and, asc, count, desc, eq, exists, gte, inArray, isNotNull, or, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, isNotNull, or, sql } from "drizzle-orm";
 
 import { getDb } from "../client";
-import { inspectorProfiles, listings, orders, type OrderStatus, serviceAreas, users } from "../schema";
+import { inspectorProfiles, listings, orders, type OrderStatus, users } from "../schema";
 
-const orderSummary = {
+/** The columns a list of orders shows: the order, its times and price, and its listing's address. */
+export const orderSummary = {
   id: orders.id,
   status: orders.status,
   deadline: orders.deadline,
@@ -23,19 +24,6 @@ const orderSummary = {
   postalCode: listings.postalCode,
 };
 
-export type OrderSummary = Awaited<ReturnType<typeof listOrdersForAgent>>[number];
-
-export async function listOrdersForAgent(agentId: string) {
-  const db = await getDb();
-  return db
-    .select({ ...orderSummary, inspectorName: users.name })
-    .from(orders)
-    .innerJoin(listings, eq(listings.id, orders.listingId))
-    .leftJoin(users, eq(users.id, orders.inspectorId))
-    .where(eq(orders.agentId, agentId))
-    .orderBy(desc(orders.createdAt));
-}
-
 /** Whether the inspector may see the job board: verified and holding a licence that has not expired. */
 export async function inspectorStanding(inspectorId: string) {
   const db = await getDb();
@@ -43,28 +31,6 @@ export async function inspectorStanding(inspectorId: string) {
   const today = new Date().toISOString().slice(0, 10);
   const licenceValid = !!profile?.licenceExpiresOn && profile.licenceExpiresOn >= today;
   return { profile: profile ?? null, verified: !!profile?.verifiedAt, licenceValid, canTakeJobs: !!profile?.verifiedAt && licenceValid };
-}
-
-/** Open orders in the inspector's service area, soonest contingency deadline first. */
-export async function listOpenJobsForInspector(inspectorId: string) {
-  const db = await getDb();
-  return db
-    .select({ ...orderSummary, accessNotes: orders.accessNotes, priceLines: orders.priceLines })
-    .from(orders)
-    .innerJoin(listings, eq(listings.id, orders.listingId))
-    .where(
-      and(
-        eq(orders.status, "open"),
-        gte(orders.deadline, sql`now()`),
-        exists(
-          db
-            .select({ one: sql`1` })
-            .from(serviceAreas)
-            .where(and(eq(serviceAreas.inspectorId, inspectorId), eq(serviceAreas.postalCode, listings.postalCode))),
-        ),
-      ),
-    )
-    .orderBy(asc(orders.deadline));
 }
 
 export async function listJobsAssignedTo(inspectorId: string) {
