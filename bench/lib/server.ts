@@ -17,7 +17,7 @@ export function buildIfStale(): "fresh" | "built" {
   return "built";
 }
 
-export type BenchServer = { url: string; pid: number; dataDir: string; seeded: Record<string, number>; log: () => string; stop: () => Promise<void> };
+export type BenchServer = { url: string; pid: number; seeded: Record<string, number>; stop: () => Promise<void> };
 
 export async function startBenchServer(): Promise<BenchServer> {
   const dataDir = tempDataDir("bench");
@@ -39,7 +39,7 @@ export async function startBenchServer(): Promise<BenchServer> {
       await app.stop();
       cleanUp();
     };
-    return { url: app.url, pid: app.pid, dataDir, seeded, log: app.log, stop };
+    return { url: app.url, pid: app.pid, seeded, stop };
   } catch (e) {
     cleanUp();
     throw e;

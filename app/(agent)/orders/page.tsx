@@ -1,10 +1,9 @@
 import type { Metadata } from "next";
 
+import { OrdersScreen } from "@/components/orders-screen";
 import { listOrdersPage } from "@/db/queries/order-lists";
 import { requireUser } from "@/lib/auth/session";
 import { listOrdersQuery } from "@/lib/validations/orders";
-
-import { OrdersScreen } from "./orders-screen";
 
 export const metadata: Metadata = { title: "Orders" };
 

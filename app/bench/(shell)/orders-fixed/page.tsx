@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
-import { OrdersScreen } from "../../../(agent)/orders/orders-screen";
+import { OrdersScreen } from "@/components/orders-screen";
+
 import { fixedOrderList } from "./fixed-orders";
 
 // The benchmark's baseline for P2: the orders page from fixed in-memory data, inside a layout shaped

@@ -3,7 +3,7 @@ import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/page-header";
 import type { OrderListDto } from "@/lib/orders/dto";
 
-/** The orders page below the shell, from its first page of orders (also the bench's fixed-data baseline). */
+/** The agent's orders page below the shell, from its first page of orders; the bench's fixed-data baseline renders it too. */
 export function OrdersScreen({ initial }: { initial: OrderListDto }) {
   return (
     <>
